@@ -1,0 +1,17 @@
+// @ts-check
+import { defineConfig } from 'astro/config';
+import node from '@astrojs/node';
+import react from '@astrojs/react';
+import tailwindcss from '@tailwindcss/vite';
+
+export default defineConfig({
+  output: 'server',
+  adapter: node({ mode: 'standalone' }),
+  integrations: [react()],
+  security: { checkOrigin: false },
+  vite: {
+    plugins: [tailwindcss()],
+    build: { chunkSizeWarningLimit: 900 },
+    ssr: { external: ['pdfkit', 'sharp', 's3rver', 'smtp-server', 'mailparser'] },
+  },
+});

@@ -1,0 +1,40 @@
+import type { TuningCurve } from '../../workers/protocol';
+import { formatFixed } from '~/lib/format';
+import { ChartFrame } from './ChartFrame';
+import { CsvButton } from './CsvButton';
+
+/** Primary + tank frequency against the tap, with the secondary's frequency with and without the streamer allowance. */
+export function TuningChart({ curve }: { curve: TuningCurve }) {
+  const data = curve.rows.map((r) => ({ tap: r.tap, fp: r.primaryFrequency === null ? null : r.primaryFrequency / 1e3 }));
+  const refs = [
+    { y: curve.secondaryFrequency / 1e3, label: 'secondary, no streamers', color: 'var(--color-ink-soft)' },
+    { y: curve.targetFrequency / 1e3, label: 'secondary with streamer allowance', color: 'var(--color-arc)' },
+    ...(curve.tapTurns !== null ? [{ x: curve.tapTurns, label: `tap ${formatFixed(curve.tapTurns, 2)}`, color: 'var(--color-copper)' }] : []),
+  ];
+  return (
+    <div className="space-y-2" data-testid="tuning-chart">
+      <div className="flex justify-end">
+        <CsvButton
+          filename="tuning.csv"
+          header={['tap (turns)', 'primary frequency (Hz)', 'secondary frequency (Hz)', 'secondary frequency with streamers (Hz)']}
+          rows={curve.rows.map((r) => [r.tap, r.primaryFrequency, curve.secondaryFrequency, curve.targetFrequency])}
+        />
+      </div>
+      <ChartFrame
+        data={data}
+        xKey="tap"
+        xLabel="tap, turns from the inner end"
+        yLabel="frequency (kHz)"
+        lines={[{ key: 'fp', name: 'primary + tank', color: 'var(--color-copper)' }]}
+        refs={refs}
+        caption={
+          curve.tapLow !== null && curve.tapHigh !== null
+            ? `Where the copper curve crosses the blue line is the tap; search ${formatFixed(Math.min(curve.tapLow, curve.tapHigh), 2)}–${formatFixed(Math.max(curve.tapLow, curve.tapHigh), 2)} turns.`
+            : 'Where the copper curve crosses the blue line is the tap.'
+        }
+      />
+    </div>
+  );
+}
+
+export default TuningChart;

@@ -1,0 +1,51 @@
+import { useMemo, useState } from 'react';
+import { parseDesign, type DesignInput } from '~/lib/design';
+import type { Result } from '~/solver';
+import type { UnitSystem } from '~/lib/format';
+import { CoilDrawing } from '../drawing/CoilDrawing';
+import { ResultsPanel } from './results/ResultsPanel';
+import { ChartsPanel } from './ChartsPanel';
+import { UnitSwitch } from './UnitSwitch';
+
+export type DesignViewerProps = {
+  name: string;
+  design: DesignInput;
+  result: Result | null;
+  unitSystem?: UnitSystem;
+};
+
+/** A saved design, read-only: drawing, results and charts, no inputs. For share links and build sheets. */
+export default function DesignViewer({ name, design, result, unitSystem = 'metric' }: DesignViewerProps) {
+  const [system, setSystem] = useState<UnitSystem>(unitSystem);
+  const parsed = useMemo(() => parseDesign(design), [design]);
+  const inputKey = useMemo(() => JSON.stringify(design), [design]);
+  if (!parsed.ok || !result) {
+    return (
+      <p className="cw-alert" role="status">
+        “{name}” can no longer be computed: {parsed.ok ? 'the solver gave no result' : parsed.issues.map((i) => `${i.path}: ${i.message}`).join('; ')}.
+      </p>
+    );
+  }
+  return (
+    <div className="space-y-6" data-testid="design-viewer">
+      <UnitSwitch value={system} onChange={setSystem} />
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
+        <section className="cw-card self-start" aria-labelledby="viewer-drawing">
+          <h2 id="viewer-drawing" className="mb-2 text-lg font-semibold">
+            Side section
+          </h2>
+          <CoilDrawing design={parsed.design} result={result} system={system} />
+        </section>
+        <section aria-labelledby="viewer-results" className="space-y-3">
+          <h2 id="viewer-results" className="text-lg font-semibold">
+            Results
+          </h2>
+          <ResultsPanel result={result} system={system} />
+        </section>
+      </div>
+      <ChartsPanel design={parsed.design} input={design} inputKey={inputKey} system={system}  />
+    </div>
+  );
+}
+
+export { DesignViewer };

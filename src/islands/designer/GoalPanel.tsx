@@ -1,0 +1,133 @@
+import { useId, useState, type FormEvent } from 'react';
+import { parseQuantity } from '~/lib/design';
+import { formatFixed, formatQuantity, lengthInputText, type UnitSystem } from '~/lib/format';
+import type { Goal, GoalAnswer } from '../../workers/protocol';
+import { solverClient } from './solver-client';
+
+type Props = {
+  /** the design as it stands, as the API takes it */
+  input: unknown;
+  system: UnitSystem;
+  hasPrimary: boolean;
+  hasTank: boolean;
+  readOnly: boolean;
+  /** writes the answer into the form */
+  apply: (answer: GoalAnswer, goal: Goal) => void;
+};
+
+type Status = { tone: 'ok' | 'fault'; text: string } | null;
+
+/** Goal-first entry: fix what the coil must do and let the solver's inverse functions fill in the input. */
+export function GoalPanel({ input, system, hasPrimary, hasTank, readOnly, apply }: Props) {
+  const [freq, setFreq] = useState('');
+  const [tap, setTap] = useState('');
+  const [k, setK] = useState('');
+  const [status, setStatus] = useState<Record<Goal['kind'], Status>>({ frequency: null, tap: null, coupling: null });
+  const [busy, setBusy] = useState<Goal['kind'] | null>(null);
+  const ids = { f: useId(), t: useId(), k: useId() };
+
+  async function run(goal: Goal, describe: (a: GoalAnswer) => string, unreachable: string) {
+    setBusy(goal.kind);
+    try {
+      const r = await solverClient().request({ type: 'goal', input, goal });
+      if (!r.ok) {
+        setStatus((s) => ({ ...s, [goal.kind]: { tone: 'fault', text: r.message ?? 'Fix the fields marked in the design first.' } }));
+      } else if (r.reply.type === 'goal' && r.reply.data) {
+        apply(r.reply.data, goal);
+        setStatus((s) => ({ ...s, [goal.kind]: { tone: 'ok', text: describe(r.reply.data as GoalAnswer) } }));
+      } else setStatus((s) => ({ ...s, [goal.kind]: { tone: 'fault', text: unreachable } }));
+    } finally {
+      setBusy(null);
+    }
+  }
+
+  function onFrequency(e: FormEvent) {
+    e.preventDefault();
+    const p = parseQuantity(freq, 'frequency');
+    if (!p.ok || !(p.value > 0)) return setStatus((s) => ({ ...s, frequency: { tone: 'fault', text: `Target frequency: ${p.ok ? 'must be above 0' : p.message}` } }));
+    void run(
+      { kind: 'frequency', hz: p.value },
+      (a) => (a.kind === 'frequency' ? `Secondary turns set to ${Math.round(a.turns)} (winding ${formatQuantity(a.windingLength, 'length', { system })}).` : ''),
+      'No turn count that fits reaches this frequency with this form and wire.',
+    );
+  }
+
+  function onTap(e: FormEvent) {
+    e.preventDefault();
+    const t = Number(tap.replace(',', '.'));
+    if (!Number.isFinite(t) || t <= 0) return setStatus((s) => ({ ...s, tap: { tone: 'fault', text: 'Tap: enter the turns from the inner end, e.g. 8.5' } }));
+    void run(
+      { kind: 'tap', turns: t },
+      (a) => (a.kind === 'tap' ? `Tank capacitance set to ${formatQuantity(a.capacitance, 'capacitance', { digits: 3 })} for a tap at ${formatFixed(t, 2)} turns.` : ''),
+      'No capacitance puts the tap there.',
+    );
+  }
+
+  function onCoupling(e: FormEvent) {
+    e.preventDefault();
+    const v = Number(k.replace(',', '.'));
+    if (!Number.isFinite(v) || v <= 0 || v > 0.9) return setStatus((s) => ({ ...s, coupling: { tone: 'fault', text: 'Target k: enter a number above 0 and at most 0.9, e.g. 0.15' } }));
+    void run(
+      { kind: 'coupling', k: v },
+      (a) => (a.kind === 'coupling' ? `Secondary elevation set to ${lengthInputText(a.elevation, system, 4)} for k = ${v}.` : ''),
+      'No secondary elevation gives this k with this primary; more primary turns near the secondary couple tighter.',
+    );
+  }
+
+  const line = (kind: Goal['kind']) => {
+    const s = status[kind];
+    return (
+      <p role="status" className={s ? (s.tone === 'ok' ? 'text-sm text-sound' : 'cw-field-error') : 'sr-only'}>
+        {s?.text ?? ''}
+      </p>
+    );
+  };
+
+  return (
+    <section className="cw-card space-y-4" aria-labelledby="goal-title">
+      <div>
+        <h2 id="goal-title" className="text-lg font-semibold">
+          Start from a goal
+        </h2>
+        <p className="cw-hint">Fix a number the coil must meet; the matching input is filled in for you.</p>
+      </div>
+      <form onSubmit={onFrequency} className="grid gap-2 sm:grid-cols-[1fr_auto] sm:items-end">
+        <div>
+          <label htmlFor={ids.f} className="cw-label text-sm">
+            Target loaded frequency
+          </label>
+          <input id={ids.f} className="cw-input" value={freq} onChange={(e) => setFreq(e.target.value)} placeholder="e.g. 250 kHz" disabled={readOnly} autoComplete="off" />
+        </div>
+        <button type="submit" className="cw-btn cw-btn-quiet" disabled={readOnly || busy !== null}>
+          Fill in turns
+        </button>
+        <div className="sm:col-span-2">{line('frequency')}</div>
+      </form>
+      <form onSubmit={onTap} className="grid gap-2 sm:grid-cols-[1fr_auto] sm:items-end">
+        <div>
+          <label htmlFor={ids.t} className="cw-label text-sm">
+            Tap at (turns from the inner end)
+          </label>
+          <input id={ids.t} className="cw-input" value={tap} onChange={(e) => setTap(e.target.value)} placeholder="e.g. 8.5" inputMode="decimal" disabled={readOnly || !hasPrimary} autoComplete="off" />
+        </div>
+        <button type="submit" className="cw-btn cw-btn-quiet" disabled={readOnly || !hasPrimary || busy !== null}>
+          Fill in tank capacitance
+        </button>
+        <div className="sm:col-span-2">{hasPrimary ? line('tap') : <p className="cw-hint">Needs a primary.</p>}</div>
+      </form>
+      <form onSubmit={onCoupling} className="grid gap-2 sm:grid-cols-[1fr_auto] sm:items-end">
+        <div>
+          <label htmlFor={ids.k} className="cw-label text-sm">
+            Target coupling k
+          </label>
+          <input id={ids.k} className="cw-input" value={k} onChange={(e) => setK(e.target.value)} placeholder="e.g. 0.15" inputMode="decimal" disabled={readOnly || !hasPrimary} autoComplete="off" />
+        </div>
+        <button type="submit" className="cw-btn cw-btn-quiet" disabled={readOnly || !hasPrimary || busy !== null}>
+          Fill in elevation
+        </button>
+        <div className="sm:col-span-2">{hasPrimary ? line('coupling') : <p className="cw-hint">Needs a primary.</p>}</div>
+      </form>
+      {!hasTank && hasPrimary && <p className="cw-hint">The tap goal needs a tank capacitor or will add one.</p>}
+    </section>
+  );
+}

@@ -1,0 +1,281 @@
+import type { DesignInput } from '~/lib/design';
+import { lengthInputText, convertLengthText, type UnitSystem } from '~/lib/format';
+
+/**
+ * What the designer's form holds: every field as the text in its input, every optional part with a
+ * switch, so that turning a part off and on again keeps what was typed. Field paths mirror the
+ * design's, so the schema's issues land on the right input.
+ */
+export interface FormValues {
+  name: string;
+  secondary: {
+    formDiameter: string;
+    turns: string;
+    wireMode: 'awg' | 'diameter';
+    wire: { awg: string; insulation: 'bare' | 'single' | 'heavy'; diameter: string; insulatedDiameter: string };
+    windingLength: string;
+    elevation: string;
+  };
+  groundClearance: string;
+  topload: { shape: 'none' | 'toroid' | 'sphere'; majorDiameter: string; minorDiameter: string; diameter: string; elevation: string };
+  primary: {
+    enabled: boolean;
+    shape: 'flat' | 'helical' | 'conical';
+    innerDiameter: string;
+    turns: string;
+    conductorDiameter: string;
+    spacing: string;
+    angle: string;
+    elevation: string;
+  };
+  tank: { mode: 'none' | 'single' | 'bank'; capacitance: string; unitCapacitance: string; unitVoltage: string; series: string; parallel: string };
+  supply: {
+    kind: 'none' | 'transformer' | 'solid-state';
+    voltage: string;
+    current: string;
+    lineFrequency: string;
+    breakRate: string;
+    busVoltage: string;
+  };
+  tuning: { streamerMode: 'capacitance' | 'length'; streamerCapacitance: string; streamerLength: string; targetCoupling: string };
+}
+
+/** Paths of the fields that hold lengths: these follow the unit switch. */
+export const LENGTH_PATHS = [
+  'secondary.formDiameter',
+  'secondary.wire.diameter',
+  'secondary.wire.insulatedDiameter',
+  'secondary.windingLength',
+  'secondary.elevation',
+  'groundClearance',
+  'topload.majorDiameter',
+  'topload.minorDiameter',
+  'topload.diameter',
+  'topload.elevation',
+  'primary.innerDiameter',
+  'primary.conductorDiameter',
+  'primary.spacing',
+  'primary.elevation',
+  'tuning.streamerLength',
+] as const;
+
+export type LengthPath = (typeof LENGTH_PATHS)[number];
+
+/** A blank, buildable starting point used when there is neither an example nor a draft. */
+export function emptyValues(system: UnitSystem): FormValues {
+  const L = (m: number) => lengthInputText(m, system, 4);
+  return {
+    name: 'Untitled coil',
+    secondary: {
+      formDiameter: system === 'imperial' ? '4 in' : '100 mm',
+      turns: '900',
+      wireMode: 'awg',
+      wire: { awg: '24', insulation: 'heavy', diameter: '', insulatedDiameter: '' },
+      windingLength: '',
+      elevation: L(0),
+    },
+    groundClearance: system === 'imperial' ? '20 in' : '500 mm',
+    topload: { shape: 'none', majorDiameter: L(0.45), minorDiameter: L(0.11), diameter: L(0.3), elevation: L(0.08) },
+    primary: {
+      enabled: false,
+      shape: 'flat',
+      innerDiameter: L(0.16),
+      turns: '10',
+      conductorDiameter: L(0.00635),
+      spacing: L(0.00635),
+      angle: '30 deg',
+      elevation: L(0),
+    },
+    tank: { mode: 'none', capacitance: '10 nF', unitCapacitance: '100 nF', unitVoltage: '2 kV', series: '10', parallel: '1' },
+    supply: { kind: 'none', voltage: '12 kV', current: '30 mA', lineFrequency: system === 'imperial' ? '60 Hz' : '50 Hz', breakRate: '', busVoltage: '340 V' },
+    tuning: { streamerMode: 'capacitance', streamerCapacitance: '', streamerLength: '', targetCoupling: '' },
+  };
+}
+
+const text = (v: number | string | undefined, kind: 'length' | 'other', system: UnitSystem): string => {
+  if (v === undefined) return '';
+  if (typeof v === 'number') {
+    if (kind === 'length') return lengthInputText(v, system);
+    return String(v);
+  }
+  return kind === 'length' ? convertLengthText(v, system) : v;
+};
+
+/** Fills the form from a design as stored, lengths shown in `system` (the same lengths, rewritten). */
+export function fromDesignInput(d: DesignInput, name: string, system: UnitSystem): FormValues {
+  const v = emptyValues(system);
+  v.name = name;
+  const Lt = (x: number | string | undefined) => text(x, 'length', system);
+  const Ot = (x: number | string | undefined) => text(x, 'other', system);
+  const s = d.secondary;
+  v.secondary.formDiameter = Lt(s.formDiameter);
+  v.secondary.turns = String(s.turns);
+  if ('awg' in s.wire) {
+    v.secondary.wireMode = 'awg';
+    v.secondary.wire.awg = String(s.wire.awg);
+    v.secondary.wire.insulation = s.wire.insulation;
+  } else {
+    v.secondary.wireMode = 'diameter';
+    v.secondary.wire.diameter = Lt(s.wire.diameter);
+    v.secondary.wire.insulatedDiameter = Lt(s.wire.insulatedDiameter);
+  }
+  v.secondary.windingLength = Lt(s.windingLength);
+  v.secondary.elevation = Lt(s.elevation);
+  v.groundClearance = d.groundClearance === undefined ? '' : Lt(d.groundClearance);
+  if (d.topload) {
+    v.topload.shape = d.topload.shape;
+    if (d.topload.shape === 'toroid') {
+      v.topload.majorDiameter = Lt(d.topload.majorDiameter);
+      v.topload.minorDiameter = Lt(d.topload.minorDiameter);
+    } else v.topload.diameter = Lt(d.topload.diameter);
+    v.topload.elevation = Lt(d.topload.elevation);
+  }
+  if (d.primary) {
+    const p = d.primary;
+    v.primary = {
+      enabled: true,
+      shape: p.shape,
+      innerDiameter: Lt(p.innerDiameter),
+      turns: String(p.turns),
+      conductorDiameter: Lt(p.conductorDiameter),
+      spacing: Lt(p.spacing),
+      angle: p.angle === undefined ? v.primary.angle : Ot(p.angle),
+      elevation: Lt(p.elevation),
+    };
+  }
+  if (d.tank) {
+    if ('capacitance' in d.tank) {
+      v.tank.mode = 'single';
+      v.tank.capacitance = Ot(d.tank.capacitance);
+    } else {
+      v.tank.mode = 'bank';
+      v.tank.unitCapacitance = Ot(d.tank.unitCapacitance);
+      v.tank.unitVoltage = Ot(d.tank.unitVoltage);
+      v.tank.series = String(d.tank.series);
+      v.tank.parallel = String(d.tank.parallel);
+    }
+  }
+  if (d.supply) {
+    if (d.supply.kind === 'transformer') {
+      v.supply.kind = 'transformer';
+      v.supply.voltage = Ot(d.supply.voltage);
+      v.supply.current = Ot(d.supply.current);
+      v.supply.lineFrequency = Ot(d.supply.lineFrequency);
+      v.supply.breakRate = Ot(d.supply.breakRate);
+    } else {
+      v.supply.kind = 'solid-state';
+      v.supply.busVoltage = Ot(d.supply.busVoltage);
+    }
+  }
+  const t = d.tuning;
+  if (t) {
+    v.tuning.streamerCapacitance = Ot(t.streamerCapacitance);
+    v.tuning.streamerLength = Lt(t.streamerLength);
+    v.tuning.streamerMode = t.streamerLength !== undefined && t.streamerCapacitance === undefined ? 'length' : 'capacitance';
+    v.tuning.targetCoupling = t.targetCoupling === undefined ? '' : String(t.targetCoupling);
+  }
+  return v;
+}
+
+/** Optional text: blank means "not given" (the schema's default applies). */
+const opt = (s: string): string | undefined => (s.trim() === '' ? undefined : s.trim());
+
+/**
+ * A number field as the schema wants it: a JS number when the text is a plain number, otherwise the
+ * text itself so the schema's message ("expected a whole number") names the problem.
+ */
+function num(s: string): number | string {
+  const t = s.trim().replace(/^(-?\d+),(\d+)$/, '$1.$2');
+  if (t !== '' && /^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(t)) return Number(t);
+  return t;
+}
+
+function withoutUndefined<T extends Record<string, unknown>>(o: T): T {
+  for (const k of Object.keys(o)) if (o[k] === undefined) delete o[k];
+  return o;
+}
+
+/** The design the form describes, in the shape the API and the solver take. */
+export function toDesignInput(v: FormValues): DesignInput {
+  const s = v.secondary;
+  const wire =
+    s.wireMode === 'awg'
+      ? { awg: num(s.wire.awg), insulation: s.wire.insulation }
+      : { diameter: s.wire.diameter.trim(), insulatedDiameter: s.wire.insulatedDiameter.trim() };
+  const t = v.topload;
+  const topload =
+    t.shape === 'toroid'
+      ? withoutUndefined({ shape: 'toroid' as const, majorDiameter: t.majorDiameter.trim(), minorDiameter: t.minorDiameter.trim(), elevation: opt(t.elevation) })
+      : t.shape === 'sphere'
+        ? withoutUndefined({ shape: 'sphere' as const, diameter: t.diameter.trim(), elevation: opt(t.elevation) })
+        : null;
+  const p = v.primary;
+  const primary = p.enabled
+    ? withoutUndefined({
+        shape: p.shape,
+        innerDiameter: p.innerDiameter.trim(),
+        turns: num(p.turns),
+        conductorDiameter: p.conductorDiameter.trim(),
+        spacing: p.spacing.trim(),
+        angle: p.shape === 'conical' ? p.angle.trim() : undefined,
+        elevation: opt(p.elevation),
+      })
+    : null;
+  const k = v.tank;
+  const tank =
+    k.mode === 'single'
+      ? { capacitance: k.capacitance.trim() }
+      : k.mode === 'bank'
+        ? { unitCapacitance: k.unitCapacitance.trim(), unitVoltage: k.unitVoltage.trim(), series: num(k.series), parallel: num(k.parallel) }
+        : null;
+  const u = v.supply;
+  const supply =
+    u.kind === 'transformer'
+      ? withoutUndefined({
+          kind: 'transformer' as const,
+          voltage: u.voltage.trim(),
+          current: u.current.trim(),
+          lineFrequency: u.lineFrequency.trim(),
+          breakRate: opt(u.breakRate),
+        })
+      : u.kind === 'solid-state'
+        ? { kind: 'solid-state' as const, busVoltage: u.busVoltage.trim() }
+        : null;
+  const g = v.tuning;
+  const tuning = withoutUndefined({
+    streamerCapacitance: g.streamerMode === 'capacitance' ? opt(g.streamerCapacitance) : undefined,
+    streamerLength: g.streamerMode === 'length' ? opt(g.streamerLength) : undefined,
+    targetCoupling: opt(g.targetCoupling) === undefined ? undefined : num(g.targetCoupling),
+  });
+  const design = withoutUndefined({
+    secondary: withoutUndefined({
+      formDiameter: s.formDiameter.trim(),
+      turns: num(s.turns),
+      wire,
+      windingLength: opt(s.windingLength),
+      elevation: opt(s.elevation),
+    }),
+    groundClearance: opt(v.groundClearance),
+    topload,
+    primary,
+    tank,
+    supply,
+    tuning: Object.keys(tuning).length ? tuning : undefined,
+  });
+  // the schema decides whether each field is acceptable; the cast only names the intended shape
+  return design as unknown as DesignInput;
+}
+
+/** Rewrites every length field in the other unit system; invalid text is left as typed. */
+export function convertLengths(v: FormValues, system: UnitSystem): FormValues {
+  const next: FormValues = structuredClone(v);
+  for (const path of LENGTH_PATHS) {
+    const parts = path.split('.');
+    let o = next as unknown as Record<string, unknown>;
+    for (const p of parts.slice(0, -1)) o = o[p] as Record<string, unknown>;
+    const last = parts[parts.length - 1];
+    const cur = o[last];
+    if (typeof cur === 'string' && cur.trim() !== '') o[last] = convertLengthText(cur, system);
+  }
+  return next;
+}

@@ -1,0 +1,46 @@
+import { useEffect, useRef, useState } from 'react';
+import type { DesignIssue, DesignSI, Result } from '~/solver';
+import { solverClient } from './solver-client';
+
+export type LiveState =
+  | { status: 'idle' }
+  | { status: 'ok'; design: DesignSI; result: Result; ms: number }
+  | { status: 'invalid'; issues: DesignIssue[]; message?: string };
+
+const QUIET_MS = 150;
+
+/**
+ * Solves the design in the worker as the builder types: at once after a pause, otherwise at most
+ * every 150 ms with the latest input. A reply older than the one on screen is dropped, and the last
+ * good result stays available while the design is invalid, so the panel never flickers to empty.
+ */
+export function useLiveSolve(input: unknown, key: string): { live: LiveState; last: { design: DesignSI; result: Result } | null; pending: boolean } {
+  const [live, setLive] = useState<LiveState>({ status: 'idle' });
+  const [last, setLast] = useState<{ design: DesignSI; result: Result } | null>(null);
+  const [pending, setPending] = useState(true);
+  const seq = useRef(0);
+  const shown = useRef(0);
+  const lastRun = useRef(-Infinity);
+  const inputRef = useRef(input);
+  inputRef.current = input;
+
+  useEffect(() => {
+    const mine = ++seq.current;
+    setPending(true);
+    const wait = Math.max(0, lastRun.current + QUIET_MS - performance.now());
+    const timer = setTimeout(async () => {
+      lastRun.current = performance.now();
+      const r = await solverClient().request({ type: 'solve', input: inputRef.current });
+      if (mine < shown.current) return;
+      shown.current = mine;
+      if (mine === seq.current) setPending(false);
+      if (r.ok && r.reply.type === 'solve') {
+        setLive({ status: 'ok', ...r.reply.data });
+        setLast({ design: r.reply.data.design, result: r.reply.data.result });
+      } else if (!r.ok) setLive({ status: 'invalid', issues: r.issues, message: r.message });
+    }, wait);
+    return () => clearTimeout(timer);
+  }, [key]);
+
+  return { live, last, pending };
+}

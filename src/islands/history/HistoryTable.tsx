@@ -1,0 +1,106 @@
+import { useState } from 'react';
+import { call } from '~/lib/library/api-call';
+import { formatSI, formatTurns } from '~/lib/library/format';
+
+export type RevisionRow = {
+  revision: number;
+  createdAt: string;
+  author: string;
+  name: string;
+  message: string | null;
+  loadedFrequency: number | null;
+  tapTurns: number | null;
+};
+
+type Props = { designId: string; latest: number; canWrite: boolean; revisions: RevisionRow[] };
+
+function when(iso: string) {
+  return new Date(iso).toLocaleString(undefined, { year: 'numeric', month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit' });
+}
+
+/** Every revision, newest first; pick two to compare, open one read-only, or restore one as a new revision. */
+export default function HistoryTable({ designId, latest, canWrite, revisions }: Props) {
+  const [from, setFrom] = useState(revisions[1]?.revision ?? revisions[0]?.revision ?? 1);
+  const [to, setTo] = useState(revisions[0]?.revision ?? 1);
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+
+  async function restore(n: number) {
+    setBusy(true);
+    setError(null);
+    const r = await call<{ revision: number }>('POST', `/api/v1/designs/${designId}/revisions/${n}/restore`, { revision: latest });
+    setBusy(false);
+    if (!r.ok) return setError(r.status === 409 ? 'Someone saved a newer revision meanwhile; reload the page and try again.' : r.message);
+    window.location.assign(`/designs/${designId}/history?restored=${r.data.revision}`);
+  }
+
+  return (
+    <div className="space-y-4">
+      <form action={`/designs/${designId}/compare`} method="get" className="flex flex-wrap items-end gap-3">
+        <div>
+          <label htmlFor="cmp-from" className="cw-label">Compare revision</label>
+          <select id="cmp-from" name="from" className="cw-input" value={from} onChange={(e) => setFrom(Number(e.target.value))}>
+            {revisions.map((r) => (
+              <option key={r.revision} value={r.revision}>{r.revision}</option>
+            ))}
+          </select>
+        </div>
+        <div>
+          <label htmlFor="cmp-to" className="cw-label">with revision</label>
+          <select id="cmp-to" name="to" className="cw-input" value={to} onChange={(e) => setTo(Number(e.target.value))}>
+            {revisions.map((r) => (
+              <option key={r.revision} value={r.revision}>{r.revision}</option>
+            ))}
+          </select>
+        </div>
+        <button type="submit" className="cw-btn cw-btn-primary" disabled={from === to}>
+          Compare side by side
+        </button>
+      </form>
+      <div role="alert" className={error ? 'cw-alert' : undefined}>{error}</div>
+      <div className="overflow-x-auto rounded-lg border border-rule bg-panel">
+        <table className="w-full min-w-[48rem] border-collapse text-left">
+          <caption className="sr-only">Revisions, newest first</caption>
+          <thead className="border-b border-rule text-sm text-ink-soft">
+            <tr>
+              <th scope="col" className="px-3 py-2 font-medium">Revision</th>
+              <th scope="col" className="px-3 py-2 font-medium">Saved</th>
+              <th scope="col" className="px-3 py-2 font-medium">By</th>
+              <th scope="col" className="px-3 py-2 font-medium">Message</th>
+              <th scope="col" className="px-3 py-2 font-medium">Loaded frequency</th>
+              <th scope="col" className="px-3 py-2 font-medium">Tap</th>
+              <th scope="col" className="px-3 py-2"><span className="sr-only">Actions</span></th>
+            </tr>
+          </thead>
+          <tbody>
+            {revisions.map((r) => (
+              <tr key={r.revision} className="border-b border-rule last:border-b-0" data-revision={r.revision}>
+                <td className="px-3 py-2 font-medium">
+                  {r.revision}
+                  {r.revision === latest && <span className="ml-1 text-sm font-normal text-ink-soft">(latest)</span>}
+                </td>
+                <td className="px-3 py-2">{when(r.createdAt)}</td>
+                <td className="px-3 py-2">{r.author}</td>
+                <td className="px-3 py-2">{r.message ?? <span className="text-ink-soft">—</span>}</td>
+                <td className="px-3 py-2 tabular-nums">{formatSI(r.loadedFrequency, 'Hz')}</td>
+                <td className="px-3 py-2 tabular-nums">{formatTurns(r.tapTurns)}</td>
+                <td className="px-3 py-2">
+                  <div className="flex justify-end gap-1">
+                    <a className="cw-btn cw-btn-quiet cw-btn-small" href={`/designs/${designId}/revisions/${r.revision}`}>
+                      Open<span className="sr-only"> revision {r.revision}</span>
+                    </a>
+                    {canWrite && r.revision !== latest && (
+                      <button type="button" className="cw-btn cw-btn-quiet cw-btn-small" disabled={busy} onClick={() => void restore(r.revision)}>
+                        Restore<span className="sr-only"> revision {r.revision}</span>
+                      </button>
+                    )}
+                  </div>
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+    </div>
+  );
+}

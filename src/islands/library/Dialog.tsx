@@ -1,0 +1,28 @@
+import { useEffect, useRef, type ReactNode } from 'react';
+
+type Props = { open: boolean; title: string; onClose: () => void; children: ReactNode };
+
+/** A modal <dialog>: focus moves in on open, Escape closes, and the page behind is inert. */
+export function Dialog({ open, title, onClose, children }: Props) {
+  const ref = useRef<HTMLDialogElement>(null);
+  useEffect(() => {
+    const d = ref.current;
+    if (!d) return;
+    if (open && !d.open) d.showModal();
+    if (!open && d.open) d.close();
+  }, [open]);
+  return (
+    <dialog
+      ref={ref}
+      aria-labelledby="cw-dialog-title"
+      className="m-auto w-[min(32rem,calc(100vw-2rem))] rounded-xl border border-rule bg-panel p-5 text-ink backdrop:bg-black/40"
+      onClose={onClose}
+      onCancel={onClose}
+    >
+      <h2 id="cw-dialog-title" className="mb-3 text-xl">
+        {title}
+      </h2>
+      {children}
+    </dialog>
+  );
+}

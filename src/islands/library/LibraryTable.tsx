@@ -1,0 +1,337 @@
+import { useCallback, useEffect, useMemo, useRef, useState, type FormEvent } from 'react';
+import {
+  createColumnHelper,
+  flexRender,
+  getCoreRowModel,
+  getFilteredRowModel,
+  getPaginationRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type ColumnFiltersState,
+  type SortingState,
+} from '@tanstack/react-table';
+import { FormMessage } from '~/components/ui/FormMessage';
+import { formatSI, formatTurns } from '~/lib/library/format';
+import { Dialog } from './Dialog';
+import { deleteDesign, duplicateDesign, importDesign, listDesigns, renameDesign, type LibraryRole, type LibraryRow } from './library-api';
+
+type Props = { pageSize?: number };
+
+const roleLabel: Record<LibraryRole, string> = { owner: 'Owner', editor: 'Editor', viewer: 'Viewer', admin: 'Site admin' };
+const column = createColumnHelper<LibraryRow>();
+
+function formatDate(iso: string): string {
+  const d = new Date(iso);
+  return Number.isNaN(d.getTime()) ? '—' : d.toLocaleString(undefined, { year: 'numeric', month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit' });
+}
+
+export default function LibraryTable({ pageSize = 20 }: Props) {
+  const [rows, setRows] = useState<LibraryRow[]>([]);
+  const [loading, setLoading] = useState(true);
+  const [error, setError] = useState<string | null>(null);
+  const [status, setStatus] = useState<string | null>(null);
+  const [busy, setBusy] = useState(false);
+  const [sorting, setSorting] = useState<SortingState>([{ id: 'updatedAt', desc: true }]);
+  const [globalFilter, setGlobalFilter] = useState('');
+  const [columnFilters, setColumnFilters] = useState<ColumnFiltersState>([]);
+  const [renaming, setRenaming] = useState<LibraryRow | null>(null);
+  const [newName, setNewName] = useState('');
+  const [nameError, setNameError] = useState<string | null>(null);
+  const [deleting, setDeleting] = useState<LibraryRow | null>(null);
+  const fileRef = useRef<HTMLInputElement>(null);
+
+  const load = useCallback(async () => {
+    setLoading(true);
+    const r = await listDesigns();
+    setLoading(false);
+    if (r.ok) setRows(r.data.designs);
+    else setError(r.message);
+  }, []);
+  useEffect(() => {
+    void load();
+  }, [load]);
+
+  async function run(action: () => Promise<{ ok: boolean; message?: string }>, done: string) {
+    setBusy(true);
+    setError(null);
+    setStatus(null);
+    const r = await action();
+    setBusy(false);
+    if (r.ok) {
+      setStatus(done);
+      await load();
+      return true;
+    }
+    setError(r.message ?? 'Something went wrong.');
+    return false;
+  }
+
+  async function onRename(e: FormEvent) {
+    e.preventDefault();
+    if (!renaming) return;
+    const name = newName.trim();
+    if (!name) return setNameError('Give the design a name.');
+    if (name.length > 120) return setNameError('Keep the name under 120 characters.');
+    const target = renaming;
+    setRenaming(null);
+    await run(async () => {
+      const r = await renameDesign(target.id, name);
+      return r.ok ? { ok: true } : { ok: false, message: r.issues[0]?.message ?? r.message };
+    }, `Renamed to “${name}”.`);
+  }
+
+  async function onImport(file: File | undefined) {
+    if (!file) return;
+    if (file.size > 256 * 1024) return setError('That file is larger than 256 kB; a design file is only a few kB.');
+    let parsed: unknown;
+    try {
+      parsed = JSON.parse(await file.text());
+    } catch {
+      return setError(`${file.name} is not a JSON file.`);
+    }
+    await run(async () => {
+      const r = await importDesign(parsed);
+      if (r.ok) return { ok: true };
+      const detail = r.issues.slice(0, 5).map((i) => `${i.path || 'file'}: ${i.message}`).join('; ');
+      return { ok: false, message: detail ? `${r.message} ${detail}` : r.message };
+    }, `Imported ${file.name}.`);
+    if (fileRef.current) fileRef.current.value = '';
+  }
+
+  const columns = useMemo(
+    () => [
+      column.accessor('name', {
+        header: 'Name',
+        cell: (c) => (
+          <a href={`/designs/${c.row.original.id}`} className="font-medium">
+            {c.getValue()}
+          </a>
+        ),
+      }),
+      column.accessor('loadedFrequency', {
+        header: 'Loaded frequency',
+        sortUndefined: 'last',
+        cell: (c) => <span className="tabular-nums">{formatSI(c.getValue(), 'Hz')}</span>,
+      }),
+      column.accessor('tapTurns', { header: 'Tap', cell: (c) => <span className="tabular-nums">{formatTurns(c.getValue())}</span> }),
+      column.accessor('updatedAt', { header: 'Updated', sortingFn: 'datetime', cell: (c) => formatDate(c.getValue()) }),
+      column.accessor('role', {
+        header: 'My role',
+        filterFn: 'equals',
+        cell: (c) => roleLabel[c.getValue()],
+      }),
+      column.display({
+        id: 'actions',
+        header: () => <span className="sr-only">Actions</span>,
+        cell: (c) => {
+          const d = c.row.original;
+          const canWrite = d.role === 'owner' || d.role === 'editor';
+          return (
+            <div className="flex flex-wrap justify-end gap-1">
+              {canWrite && (
+                <button type="button" className="cw-btn cw-btn-quiet cw-btn-small" disabled={busy} onClick={() => { setRenaming(d); setNewName(d.name); setNameError(null); }}>
+                  Rename<span className="sr-only"> {d.name}</span>
+                </button>
+              )}
+              <button type="button" className="cw-btn cw-btn-quiet cw-btn-small" disabled={busy} onClick={() => void run(() => duplicateDesign(d.id), `Copied “${d.name}” into a new design of yours.`)}>
+                Duplicate<span className="sr-only"> {d.name}</span>
+              </button>
+              <a className="cw-btn cw-btn-quiet cw-btn-small" href={`/designs/${d.id}/history`}>
+                History<span className="sr-only"> of {d.name}</span>
+              </a>
+              <a className="cw-btn cw-btn-quiet cw-btn-small" href={`/designs/${d.id}/people`}>
+                People<span className="sr-only"> of {d.name}</span>
+              </a>
+              <a className="cw-btn cw-btn-quiet cw-btn-small" href={`/api/v1/designs/${d.id}/export`} download>
+                Export<span className="sr-only"> {d.name}</span>
+              </a>
+              {d.role === 'owner' && (
+                <button type="button" className="cw-btn cw-btn-quiet cw-btn-small text-fault" disabled={busy} onClick={() => setDeleting(d)}>
+                  Delete<span className="sr-only"> {d.name}</span>
+                </button>
+              )}
+            </div>
+          );
+        },
+      }),
+    ],
+    [busy],
+  );
+
+  const table = useReactTable({
+    data: rows,
+    columns,
+    state: { sorting, globalFilter, columnFilters },
+    onSortingChange: setSorting,
+    onGlobalFilterChange: setGlobalFilter,
+    onColumnFiltersChange: setColumnFilters,
+    globalFilterFn: (row, _id, value: string) => row.original.name.toLowerCase().includes(String(value).trim().toLowerCase()),
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+    getFilteredRowModel: getFilteredRowModel(),
+    getPaginationRowModel: getPaginationRowModel(),
+    initialState: { pagination: { pageIndex: 0, pageSize } },
+    autoResetPageIndex: true,
+  });
+
+  const roleFilter = (table.getColumn('role')?.getFilterValue() as string | undefined) ?? '';
+  const shown = table.getFilteredRowModel().rows.length;
+  const { pageIndex } = table.getState().pagination;
+  const from = shown === 0 ? 0 : pageIndex * pageSize + 1;
+  const to = Math.min((pageIndex + 1) * pageSize, shown);
+
+  return (
+    <div className="space-y-4">
+      <div className="flex flex-wrap items-end gap-3">
+        <div className="min-w-48 flex-1">
+          <label htmlFor="library-search" className="cw-label">
+            Search by name
+          </label>
+          <input id="library-search" type="search" className="cw-input" value={globalFilter} onChange={(e) => setGlobalFilter(e.target.value)} autoComplete="off" />
+        </div>
+        <div>
+          <label htmlFor="library-role" className="cw-label">
+            My role
+          </label>
+          <select id="library-role" className="cw-input" value={roleFilter} onChange={(e) => table.getColumn('role')?.setFilterValue(e.target.value || undefined)}>
+            <option value="">Any</option>
+            <option value="owner">Owner</option>
+            <option value="editor">Editor</option>
+            <option value="viewer">Viewer</option>
+          </select>
+        </div>
+        <div className="flex gap-2">
+          <a href="/designs/new" className="cw-btn cw-btn-primary">
+            New design
+          </a>
+          <button type="button" className="cw-btn cw-btn-quiet" disabled={busy} onClick={() => fileRef.current?.click()}>
+            Import a file
+          </button>
+          <input ref={fileRef} type="file" accept=".json,application/json" className="sr-only" tabIndex={-1} aria-label="Design file to import" onChange={(e) => void onImport(e.target.files?.[0])} />
+        </div>
+      </div>
+
+      <FormMessage error={error} success={status} />
+
+      <div className="overflow-x-auto rounded-lg border border-rule bg-panel">
+        <table className="w-full min-w-[52rem] border-collapse text-left" data-testid="library-table">
+          <caption className="sr-only">My designs and designs shared with me</caption>
+          <thead className="border-b border-rule text-sm text-ink-soft">
+            {table.getHeaderGroups().map((hg) => (
+              <tr key={hg.id}>
+                {hg.headers.map((h) => {
+                  const sorted = h.column.getIsSorted();
+                  return (
+                    <th key={h.id} scope="col" className="px-3 py-2 font-medium" aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}>
+                      {h.column.getCanSort() ? (
+                        <button type="button" className="inline-flex items-center gap-1 rounded font-medium" onClick={h.column.getToggleSortingHandler()}>
+                          {flexRender(h.column.columnDef.header, h.getContext())}
+                          <span aria-hidden="true">{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}</span>
+                        </button>
+                      ) : (
+                        flexRender(h.column.columnDef.header, h.getContext())
+                      )}
+                    </th>
+                  );
+                })}
+              </tr>
+            ))}
+          </thead>
+          <tbody>
+            {table.getRowModel().rows.map((r) => (
+              <tr key={r.id} className="border-b border-rule last:border-b-0" data-design-id={r.original.id}>
+                {r.getVisibleCells().map((cell) => (
+                  <td key={cell.id} className="px-3 py-2 align-middle">
+                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                  </td>
+                ))}
+              </tr>
+            ))}
+            {!loading && shown === 0 && (
+              <tr>
+                <td colSpan={columns.length} className="px-3 py-6 text-center text-ink-soft">
+                  {rows.length === 0 ? (
+                    <>
+                      No designs yet. <a href="/designs/new">Start a new design</a> or import a design file.
+                    </>
+                  ) : (
+                    'No design matches the search and role filter.'
+                  )}
+                </td>
+              </tr>
+            )}
+          </tbody>
+        </table>
+      </div>
+
+      <div className="flex flex-wrap items-center justify-between gap-2 text-sm">
+        <p aria-live="polite">{loading ? 'Loading…' : `${from}–${to} of ${shown}`}</p>
+        <div className="flex gap-2">
+          <button type="button" className="cw-btn cw-btn-quiet cw-btn-small" disabled={!table.getCanPreviousPage()} onClick={() => table.previousPage()}>
+            Previous
+          </button>
+          <button type="button" className="cw-btn cw-btn-quiet cw-btn-small" disabled={!table.getCanNextPage()} onClick={() => table.nextPage()}>
+            Next
+          </button>
+        </div>
+      </div>
+
+      <Dialog open={renaming !== null} title="Rename design" onClose={() => setRenaming(null)}>
+        <form onSubmit={(e) => void onRename(e)} className="space-y-4" noValidate>
+          <div>
+            <label htmlFor="rename-input" className="cw-label">
+              New name
+            </label>
+            <input
+              id="rename-input"
+              className="cw-input"
+              value={newName}
+              maxLength={200}
+              onChange={(e) => setNewName(e.target.value)}
+              aria-invalid={nameError ? true : undefined}
+              aria-describedby={nameError ? 'rename-error' : undefined}
+              autoFocus
+            />
+            {nameError && (
+              <p id="rename-error" className="cw-field-error">
+                {nameError}
+              </p>
+            )}
+            <p className="cw-hint">Renaming saves a new revision.</p>
+          </div>
+          <div className="flex justify-end gap-2">
+            <button type="button" className="cw-btn cw-btn-quiet" onClick={() => setRenaming(null)}>
+              Cancel
+            </button>
+            <button type="submit" className="cw-btn cw-btn-primary">
+              Rename
+            </button>
+          </div>
+        </form>
+      </Dialog>
+
+      <Dialog open={deleting !== null} title="Delete this design?" onClose={() => setDeleting(null)}>
+        <p>
+          “{deleting?.name}” will be deleted for everyone who works on it, with all its revisions, share links, measurements and files. This cannot be undone.
+        </p>
+        <p className="mt-2 text-sm text-ink-soft">To keep a copy, export it first.</p>
+        <div className="mt-4 flex justify-end gap-2">
+          <button type="button" className="cw-btn cw-btn-quiet" onClick={() => setDeleting(null)} autoFocus>
+            Keep it
+          </button>
+          <button
+            type="button"
+            className="cw-btn cw-btn-primary bg-fault"
+            onClick={() => {
+              const d = deleting;
+              setDeleting(null);
+              if (d) void run(() => deleteDesign(d.id), `Deleted “${d.name}”.`);
+            }}
+          >
+            Delete for good
+          </button>
+        </div>
+      </Dialog>
+    </div>
+  );
+}

@@ -1,0 +1,146 @@
+import * as fmt from './format';
+import { BANK_NOTES, COATING_NOTES, SAFETY_CHECKLIST, SOLID_STATE_NOTES, TRANSFORMER_PROTECTION_NOTES, WINDING_NOTES, type SheetNote } from './notes';
+import type { BuildSheet } from './sheet';
+
+export interface SheetRow {
+  label: string;
+  value: string;
+  note?: string;
+}
+
+export interface SheetTable {
+  columns: string[];
+  rows: string[][];
+}
+
+export type SheetCaution = 'stored-energy' | 'supply' | 'rf' | 'general';
+
+export interface SheetSection {
+  id: string;
+  title: string;
+  rows: SheetRow[];
+  table?: SheetTable;
+  notes?: readonly SheetNote[];
+  list?: readonly string[];
+  caution?: SheetCaution;
+}
+
+const INSULATION: Record<string, string> = { bare: 'bare', single: 'single build', heavy: 'heavy build' };
+
+/** The sheet as display sections, shared word for word by the web page and the PDF. */
+export function sheetSections(sheet: BuildSheet): SheetSection[] {
+  const s = sheet.secondary;
+  const o = sheet.options;
+  const wire = s.awg !== null ? `${s.awg} AWG, ${INSULATION[s.insulation ?? 'bare']} enamel` : `${fmt.lengthShort(s.wireDiameter)} bare`;
+  const out: SheetSection[] = [
+    {
+      id: 'secondary',
+      title: 'Secondary: form and winding',
+      rows: [
+        { label: 'Form outside diameter', value: fmt.lengthShort(s.formDiameter) },
+        { label: 'Form length to cut', value: fmt.lengthShort(s.formLength), note: `winding + ${fmt.lengthShort(o.endMargin)} bare form at each end (at least 1 in; Quick cuts about 3 in over the winding, TRADE §2.14)` },
+        { label: 'Winding length', value: fmt.lengthShort(s.windingLength) },
+        { label: 'Turns', value: String(s.turns) },
+        { label: 'Wire', value: wire, note: `${fmt.lengthShort(s.insulatedDiameter)} over the enamel` },
+        { label: 'Turns per length', value: `${fmt.sig(s.turnsPerMetre / 100, 4)} per cm (${fmt.sig(s.turnsPerMetre * 0.0254, 4)} per in)`, note: `pitch ${fmt.lengthShort(s.pitch)}` },
+        { label: 'Wire length (computed)', value: fmt.lengthLong(s.wireLength) },
+        { label: 'Wire to buy', value: fmt.lengthLong(s.wireToBuy), note: `with ${fmt.percent(o.margin, 0)} extra for leads and mistakes` },
+        { label: 'Copper mass (computed)', value: fmt.mass(s.wireMass) },
+        { label: 'Copper mass to buy', value: fmt.mass(s.massToBuy) },
+        {
+          label: 'Spool',
+          value: `${s.spoolMetric.count} × ${s.spoolMetric.size} kg or ${s.spoolImperial.count} × ${s.spoolImperial.size} lb`,
+          note: 'common spool sizes (common practice); one continuous length avoids a splice',
+        },
+        { label: 'Winding time', value: fmt.duration(s.windingTime), note: `${s.turns} turns at ${fmt.sig(o.rpm, 4)} rpm, without set-up or stops` },
+        { label: 'DC resistance', value: fmt.resistance(s.dcResistance), note: 'check with an ohmmeter after winding' },
+      ],
+      notes: WINDING_NOTES,
+    },
+    {
+      id: 'checkpoints',
+      title: `Turn-count checkpoints (every ${o.every} turns)`,
+      rows: [],
+      table: {
+        columns: ['Turns', 'Height of winding', 'Mark from form end'],
+        rows: s.checkpoints.map((c) => [String(c.turns), fmt.lengthShort(c.height), fmt.lengthShort(c.heightFromFormEnd)]),
+      },
+    },
+    { id: 'coating', title: 'Coating and sealing', rows: [], notes: COATING_NOTES },
+  ];
+
+  const p = sheet.primary;
+  if (p) {
+    const rows: SheetRow[] = [
+      { label: 'Shape', value: `${p.shape}, ${fmt.sig(p.turns, 4)} turns of ${fmt.lengthShort(p.conductorDiameter)} conductor` },
+      { label: 'Conductor length (all turns)', value: fmt.lengthLong(p.conductorLength) },
+      { label: 'Conductor to buy', value: fmt.lengthLong(p.conductorToBuy), note: `with ${fmt.percent(o.margin, 0)} extra; add the leads to the tank and gap` },
+    ];
+    if (p.tapTurns !== null) {
+      rows.push({
+        label: 'Tap to set (predicted)',
+        value: `${fmt.sig(p.tapTurns, 4)} turns from the inner end (${fmt.tapPosition(p.tapTurns)})`,
+        note: p.targetFrequency !== null ? `tunes the primary to ${fmt.frequency(p.targetFrequency)}` : undefined,
+      });
+      if (p.conductorLengthAtTap !== null) rows.push({ label: 'Conductor to the tap', value: fmt.lengthLong(p.conductorLengthAtTap) });
+    } else rows.push({ label: 'Tap to set (predicted)', value: 'none: the primary cannot reach the target frequency' });
+    if (p.calibrated) {
+      rows.push({
+        label: 'Tap for the adopted measurements',
+        value:
+          p.calibrated.tapTurns !== null
+            ? `${fmt.sig(p.calibrated.tapTurns, 4)} turns from the inner end (${fmt.tapPosition(p.calibrated.tapTurns)})`
+            : 'none: out of the primary’s range',
+        note: `aims at ${fmt.frequency(p.calibrated.targetFrequency)} with ${fmt.capacitance(p.calibrated.tankCapacitance)}`,
+      });
+    }
+    rows.push({ label: 'Tuning practice', value: 'start a little low; try taps either side a fraction of a turn at a time at low power', note: 'TRADE §3.3 (hvtesla.com/tuning.html)' });
+    out.push({ id: 'primary', title: 'Primary', rows });
+  }
+
+  const t = sheet.tank;
+  if (t) {
+    const rows: SheetRow[] = [{ label: 'Tank capacitance', value: fmt.capacitance(t.capacitance) }];
+    if (t.energyAtSupplyPeak !== null) rows.push({ label: 'Stored energy at supply peak', value: fmt.energy(t.energyAtSupplyPeak), note: '½CV²: potentially lethal' });
+    const b = t.bank;
+    if (b) {
+      rows.push(
+        {
+          label: b.suggested ? 'Suggested bank' : 'Bank layout',
+          value: `${b.series} in series × ${b.parallel} strings = ${b.units} units of ${fmt.capacitance(b.unitCapacitance)} / ${fmt.voltage(b.unitVoltage)}`,
+          note: b.suggested ? `from the common 0.15 µF / 2 kV pulse capacitor; gives ${fmt.capacitance(b.capacitance)}` : undefined,
+        },
+        { label: 'String voltage rating', value: fmt.voltage(b.voltageRating), note: b.ratingMargin !== null ? `${fmt.sig(b.ratingMargin, 3)} × the supply peak (aim for at least 2 ×, common practice)` : undefined },
+      );
+      if (b.perUnitVoltage !== null) rows.push({ label: 'Voltage per unit at supply peak', value: fmt.voltage(b.perUnitVoltage) });
+      rows.push({
+        label: 'Bleeders',
+        value: `${b.bleeder.count} × ${fmt.resistance(b.bleeder.resistance)} ½ W, one across each unit`,
+        note:
+          b.bleeder.power !== null
+            ? `each dissipates V²/R = ${fmt.power(b.bleeder.power)}${b.bleeder.withinRating ? ', within ½ W' : ': above ½ W, use a higher-rated resistor'}; time constant ${fmt.sig(b.bleeder.timeConstant, 3)} s`
+            : `time constant ${fmt.sig(b.bleeder.timeConstant, 3)} s`,
+      });
+    }
+    out.push({ id: 'tank', title: 'Tank capacitor bank', rows, notes: BANK_NOTES, caution: 'stored-energy' });
+  }
+
+  const sup = sheet.supply;
+  if (sup) {
+    const rows: SheetRow[] = [{ label: 'Supply peak voltage', value: fmt.voltage(sup.peakVoltage) }];
+    if (sup.resonantCapacitance !== null) rows.push({ label: 'Resonant capacitance of the transformer', value: fmt.capacitance(sup.resonantCapacitance), note: 'C = I/(2π f V) (TRADE §2.10)' });
+    if (sup.ltrCapacitance !== null) rows.push({ label: 'Larger-than-resonant value', value: fmt.capacitance(sup.ltrCapacitance), note: '1/(4 f Z) (TRADE §2.10)' });
+    if (sup.tankToResonantRatio !== null) rows.push({ label: 'Tank / resonant', value: `${fmt.sig(sup.tankToResonantRatio, 3)} ×`, note: 'near 1 × risks resonant rise with a static or rotary gap (TRADE §2.10)' });
+    if (sup.filterBypassCapacitors !== null) rows.push({ label: 'Filter bypass capacitors', value: `${sup.filterBypassCapacitors} × 1 nF / 10 kV`, note: 'two up to about 9 kV, four above (TRADE §2.12)' });
+    out.push({
+      id: 'supply',
+      title: 'Supply and protection',
+      rows,
+      notes: sup.kind === 'transformer' ? TRANSFORMER_PROTECTION_NOTES : SOLID_STATE_NOTES,
+      caution: 'supply',
+    });
+  }
+
+  out.push({ id: 'safety', title: 'Safety checklist', rows: [], list: SAFETY_CHECKLIST, caution: 'general' });
+  return out;
+}

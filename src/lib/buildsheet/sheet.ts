@@ -1,0 +1,243 @@
+import { copperMass, BLEEDER_RESISTANCE_PER_UNIT, resistorPower, supplyPeakVoltage, type DesignSI, type Result } from '../../solver';
+import { calibratedTuning, type Calibration, type CalibratedTuning } from './calibration';
+import { suggestSpool, type SpoolSuggestion } from './spool';
+
+const INCH = 0.0254;
+
+/** Bare form left at each end of the winding: at least 1 in (TRADE §2.14, Quick, COILBLD1). */
+export const MIN_END_MARGIN = 1 * INCH;
+/** Default end margin: Quick cuts the form about 3 in longer than the winding, 1.5 in each end (TRADE §2.14). */
+export const DEFAULT_END_MARGIN = 1.5 * INCH;
+/** Bleeder wattage the trade fits across each capacitor: ½ W (Terry Fritz, TCML 2000; TRADE §2.11). */
+export const BLEEDER_RATED_POWER = 0.5;
+/** Pulse capacitor commonly bought by the hundred for banks: 0.15 µF, 2000 V DC (TRADE §1.2, §2.11, hvtesla.com/mmc.html). */
+export const COMMON_BANK_UNIT = { capacitance: 0.15e-6, voltage: 2000 } as const;
+/** String rating at least 2 × the supply peak (common practice, TRADE §2.11; no primary source). */
+export const BANK_RATING_FACTOR = 2;
+/** Most checkpoints a sheet lists, so a tiny `every` cannot produce a thousand-page table. */
+export const MAX_CHECKPOINTS = 500;
+
+export interface BuildSheetOptions {
+  /** winder speed, revolutions per minute */
+  rpm: number;
+  /** extra wire to buy as a fraction of the computed length, e.g. 0.1 */
+  margin: number;
+  /** turns between checkpoints */
+  every: number;
+  /** bare form at each end, m; at least MIN_END_MARGIN */
+  endMargin?: number;
+}
+
+export interface Checkpoint {
+  turns: number;
+  /** winding height from its first turn, m: turns × pitch */
+  height: number;
+  /** the same mark measured from the bottom end of the form */
+  heightFromFormEnd: number;
+}
+
+export interface BankLayout {
+  series: number;
+  parallel: number;
+  units: number;
+  unitCapacitance: number;
+  unitVoltage: number;
+  capacitance: number;
+  voltageRating: number;
+  /** share of the supply peak across each unit; null without a supply */
+  perUnitVoltage: number | null;
+  /** voltage rating over supply peak; null without a supply */
+  ratingMargin: number | null;
+  /** true when the bank is our suggestion from a common unit (the design gave only a capacitance) */
+  suggested: boolean;
+  bleeder: { resistance: number; ratedPower: number; power: number | null; count: number; withinRating: boolean | null; timeConstant: number };
+}
+
+export interface BuildSheet {
+  options: Required<BuildSheetOptions>;
+  secondary: {
+    formDiameter: number;
+    windingDiameter: number;
+    turns: number;
+    awg: number | null;
+    insulation: string | null;
+    wireDiameter: number;
+    insulatedDiameter: number;
+    pitch: number;
+    turnsPerMetre: number;
+    windingLength: number;
+    formLength: number;
+    wireLength: number;
+    wireToBuy: number;
+    wireMass: number;
+    massToBuy: number;
+    spoolMetric: SpoolSuggestion;
+    spoolImperial: SpoolSuggestion;
+    /** s: turns / rpm */
+    windingTime: number;
+    dcResistance: number;
+    checkpoints: Checkpoint[];
+  };
+  primary: null | {
+    shape: string;
+    turns: number;
+    conductorDiameter: number;
+    conductorLength: number;
+    conductorToBuy: number;
+    /** predicted tap (turns from the inner end) and its conductor length */
+    tapTurns: number | null;
+    conductorLengthAtTap: number | null;
+    targetFrequency: number | null;
+    /** the tap for adopted measurements, when any were adopted */
+    calibrated: CalibratedTuning | null;
+  };
+  tank: null | {
+    capacitance: number;
+    energyAtSupplyPeak: number | null;
+    bank: BankLayout | null;
+  };
+  supply: null | {
+    kind: 'transformer' | 'solid-state';
+    peakVoltage: number;
+    voltage: number | null;
+    current: number | null;
+    resonantCapacitance: number | null;
+    ltrCapacitance: number | null;
+    tankToResonantRatio: number | null;
+    /** bypass capacitors the usual filter puts from the leads to the case: 2 up to 9 kV, 4 above (TRADE §2.12) */
+    filterBypassCapacitors: number | null;
+  };
+}
+
+/**
+ * The arithmetic of a build sheet for one solved design. Everything comes from the solver's result
+ * (wire length, mass, winding length, primary lengths, tank) and the options; nothing here re-derives
+ * the physics. Winding time = turns / rpm; checkpoint n sits n × pitch above the first turn, pitch =
+ * winding length / turns; wire and primary conductor to buy = computed length × (1 + margin).
+ */
+export function buildSheet(design: DesignSI, result: Result, options: BuildSheetOptions, calibration: Calibration = {}): BuildSheet {
+  const sec = result.secondary;
+  if (!sec) throw new RangeError('The design has no computed secondary; a build sheet needs one.');
+  const s = design.secondary;
+  const endMargin = Math.max(options.endMargin ?? DEFAULT_END_MARGIN, MIN_END_MARGIN);
+  const opts = { ...options, endMargin };
+  const pitch = sec.windingLength / s.turns;
+  const wireToBuy = sec.wireLength * (1 + options.margin);
+  const massToBuy = copperMass(wireToBuy, s.wire.diameter);
+
+  const checkpoints: Checkpoint[] = [];
+  const step = Math.max(1, Math.floor(options.every));
+  for (let n = step; n < s.turns && checkpoints.length < MAX_CHECKPOINTS - 1; n += step) {
+    checkpoints.push({ turns: n, height: n * pitch, heightFromFormEnd: endMargin + n * pitch });
+  }
+  checkpoints.push({ turns: s.turns, height: sec.windingLength, heightFromFormEnd: endMargin + sec.windingLength });
+
+  const p = design.primary;
+  const primary =
+    p && result.primary
+      ? {
+          shape: p.shape,
+          turns: p.turns,
+          conductorDiameter: p.conductorDiameter,
+          conductorLength: result.primary.conductorLength,
+          conductorToBuy: result.primary.conductorLength * (1 + options.margin),
+          tapTurns: result.tuning?.tapTurns ?? null,
+          conductorLengthAtTap: result.primary.conductorLengthAtTap,
+          targetFrequency: result.tuning?.targetFrequency ?? null,
+          calibrated: calibratedTuning(design, result, calibration),
+        }
+      : null;
+
+  const peak = design.supply ? supplyPeakVoltage(design.supply) : null;
+  let tank: BuildSheet['tank'] = null;
+  if (design.tank && result.tank) {
+    const t = design.tank;
+    const bank: BankLayout | null =
+      t.kind === 'bank'
+        ? layout(t.unitCapacitance, t.unitVoltage, t.series, t.parallel, peak, false)
+        : peak !== null
+          ? suggestBank(t.capacitance, peak)
+          : null;
+    tank = { capacitance: result.tank.capacitance, energyAtSupplyPeak: result.tank.energyAtSupplyPeak, bank };
+  }
+
+  const sup = design.supply;
+  const supply: BuildSheet['supply'] =
+    sup && result.supply
+      ? {
+          kind: sup.kind,
+          peakVoltage: result.supply.peakVoltage,
+          voltage: sup.kind === 'transformer' ? sup.voltage : null,
+          current: sup.kind === 'transformer' ? sup.current : null,
+          resonantCapacitance: result.supply.resonantCapacitance,
+          ltrCapacitance: result.supply.ltrCapacitance,
+          tankToResonantRatio: result.supply.tankToResonantRatio,
+          filterBypassCapacitors: sup.kind === 'transformer' ? (sup.voltage <= 9000 ? 2 : 4) : null,
+        }
+      : null;
+
+  return {
+    options: opts,
+    secondary: {
+      formDiameter: s.formDiameter,
+      windingDiameter: sec.windingDiameter,
+      turns: s.turns,
+      awg: s.wire.awg,
+      insulation: s.wire.insulation,
+      wireDiameter: s.wire.diameter,
+      insulatedDiameter: s.wire.insulatedDiameter,
+      pitch,
+      turnsPerMetre: s.turns / sec.windingLength,
+      windingLength: sec.windingLength,
+      formLength: sec.windingLength + 2 * endMargin,
+      wireLength: sec.wireLength,
+      wireToBuy,
+      wireMass: sec.wireMass,
+      massToBuy,
+      spoolMetric: suggestSpool(massToBuy, 'kg'),
+      spoolImperial: suggestSpool(massToBuy, 'lb'),
+      windingTime: (s.turns / options.rpm) * 60,
+      dcResistance: sec.dcResistance,
+      checkpoints,
+    },
+    primary,
+    tank,
+    supply,
+  };
+}
+
+function layout(unitC: number, unitV: number, series: number, parallel: number, peak: number | null, suggested: boolean): BankLayout {
+  const perUnit = peak === null ? null : peak / series;
+  const power = perUnit === null ? null : resistorPower(perUnit, BLEEDER_RESISTANCE_PER_UNIT);
+  return {
+    series,
+    parallel,
+    units: series * parallel,
+    unitCapacitance: unitC,
+    unitVoltage: unitV,
+    capacitance: (unitC * parallel) / series,
+    voltageRating: unitV * series,
+    perUnitVoltage: perUnit,
+    ratingMargin: peak === null ? null : (unitV * series) / peak,
+    suggested,
+    bleeder: {
+      resistance: BLEEDER_RESISTANCE_PER_UNIT,
+      ratedPower: BLEEDER_RATED_POWER,
+      power,
+      count: series * parallel,
+      withinRating: power === null ? null : power <= BLEEDER_RATED_POWER,
+      timeConstant: BLEEDER_RESISTANCE_PER_UNIT * unitC,
+    },
+  };
+}
+
+/**
+ * A bank of the common 0.15 µF / 2 kV unit near a single given capacitance: enough units in series for
+ * a string rating of 2 × the supply peak, then the number of strings that comes closest to the value.
+ */
+export function suggestBank(capacitance: number, peak: number): BankLayout {
+  const u = COMMON_BANK_UNIT;
+  const series = Math.max(1, Math.ceil((BANK_RATING_FACTOR * peak) / u.voltage));
+  const parallel = Math.max(1, Math.round((capacitance * series) / u.capacitance));
+  return layout(u.capacitance, u.voltage, series, parallel, peak, true);
+}

@@ -1,0 +1,75 @@
+import { z } from 'zod';
+import { parseQuantity, QUANTITY_KINDS, type QuantityKind } from './units';
+
+/** A quantity as a user gives it: a number in SI base units or a string with a unit. */
+export type QuantityInput = number | string;
+
+export interface Bounds {
+  /** smallest accepted value in SI; `minInclusive` decides whether it is itself allowed */
+  min: number;
+  max: number;
+  minInclusive?: boolean;
+  /** the bounds as people say them, for the message */
+  label: string;
+}
+
+const typeError = (noun: string, examples: string) => (iss: { input: unknown }) =>
+  iss.input === undefined
+    ? 'is required'
+    : typeof iss.input === 'number'
+      ? `expected ${noun} such as ${examples}, got a number that is not finite`
+      : `expected ${noun} such as ${examples}, as text with a unit or a number in SI units`;
+
+function rangeMessage(b: Bounds, given: string): string {
+  return `must be ${b.label}, got ${given}`;
+}
+
+/**
+ * A quantity field: accepts a number (SI) or a string with a unit, checks the dimension and the
+ * bounds, and leaves the input as given (a saved design keeps "4 in" as "4 in").
+ */
+export function quantity(kind: QuantityKind, bounds: Bounds, description: string) {
+  const info = QUANTITY_KINDS[kind];
+  return z
+    .union([z.number(), z.string()], { error: typeError(info.noun, info.examples) })
+    .superRefine((v, ctx) => {
+      const r = parseQuantity(v, kind);
+      if (!r.ok) {
+        ctx.addIssue({ code: 'custom', message: r.message });
+        return;
+      }
+      if (!inBounds(r.value, bounds)) ctx.addIssue({ code: 'custom', message: rangeMessage(bounds, typeof v === 'number' ? `${v} ${info.siUnit}` : `"${v}"`) });
+    })
+    .describe(`${description} (${info.noun}: a number in ${info.siUnit} or text such as ${info.examples})`);
+}
+
+function inBounds(x: number, b: Bounds): boolean {
+  const aboveMin = b.minInclusive ? x >= b.min : x > b.min;
+  return aboveMin && x <= b.max;
+}
+
+/** A plain number field (counts, gauges, ratios), optionally whole. */
+export function count(bounds: Bounds, description: string, integer: boolean) {
+  return z
+    .number({
+      error: (iss) =>
+        iss.input === undefined
+          ? 'is required'
+          : typeof iss.input === 'number'
+            ? 'expected a finite number'
+            : `expected ${integer ? 'a whole number' : 'a number'}`,
+    })
+    .superRefine((v, ctx) => {
+      if (!Number.isFinite(v)) ctx.addIssue({ code: 'custom', message: 'expected a finite number' });
+      else if (integer && !Number.isInteger(v)) ctx.addIssue({ code: 'custom', message: `expected a whole number, got ${v}` });
+      else if (!inBounds(v, bounds)) ctx.addIssue({ code: 'custom', message: rangeMessage(bounds, String(v)) });
+    })
+    .describe(description);
+}
+
+/** Reads an already validated quantity into SI. */
+export function si(v: QuantityInput, kind: QuantityKind): number {
+  const r = parseQuantity(v, kind);
+  if (!r.ok) throw new RangeError(r.message);
+  return r.value;
+}

@@ -1,0 +1,207 @@
+import type { z } from 'zod';
+import { awgDiameter } from '../../solver/wire/awg';
+import { insulatedDiameter } from '../../solver/wire/insulation';
+import { checkDesign } from '../../solver/system/checks';
+import { streamerCapacitanceForLength } from '../../solver/tuning/streamer';
+import type { DesignIssue, DesignSI, PrimarySI, SupplySI, TankSI, ToploadSI } from '../../solver/types';
+import { si } from './fields';
+import { designInputSchema, KNOWN_FIELDS, type DesignInput } from './schema';
+
+export type { DesignSI, DesignIssue };
+
+export const DEFAULT_GROUND_CLEARANCE = 0.5;
+
+export type ParseDesignResult =
+  | { ok: true; design: DesignSI; input: DesignInput }
+  | { ok: false; issues: DesignIssue[] };
+
+type Issue = z.core.$ZodIssue;
+
+/**
+ * Validates a design as given by a user (field by field, then across fields) and resolves it into SI
+ * base units with every default applied. `input` is returned exactly as given.
+ */
+export function parseDesign(input: unknown): ParseDesignResult {
+  const parsed = designInputSchema.safeParse(input);
+  if (!parsed.success) {
+    return { ok: false, issues: dedupe(parsed.error.issues.flatMap((i) => plainIssues(i, [], input))) };
+  }
+  const design = toDesignSI(parsed.data);
+  const issues = checkDesign(design);
+  if (issues.length > 0) return { ok: false, issues };
+  return { ok: true, design, input: input as DesignInput };
+}
+
+/** Resolves a validated input into SI, applying the defaults (ground clearance 0.5 m, elevations 0, close winding). */
+export function toDesignSI(d: DesignInput): DesignSI {
+  const s = d.secondary;
+  const wire =
+    'awg' in s.wire
+      ? {
+          diameter: awgDiameter(s.wire.awg),
+          insulatedDiameter: insulatedDiameter(awgDiameter(s.wire.awg), s.wire.insulation),
+          awg: s.wire.awg,
+          insulation: s.wire.insulation,
+        }
+      : { diameter: si(s.wire.diameter, 'length'), insulatedDiameter: si(s.wire.insulatedDiameter, 'length'), awg: null, insulation: null };
+
+  let topload: ToploadSI | null = null;
+  if (d.topload) {
+    const elevation = d.topload.elevation === undefined ? 0 : si(d.topload.elevation, 'length');
+    topload =
+      d.topload.shape === 'toroid'
+        ? { shape: 'toroid', majorDiameter: si(d.topload.majorDiameter, 'length'), minorDiameter: si(d.topload.minorDiameter, 'length'), elevation }
+        : { shape: 'sphere', diameter: si(d.topload.diameter, 'length'), elevation };
+  }
+
+  let primary: PrimarySI | null = null;
+  if (d.primary) {
+    const p = d.primary;
+    primary = {
+      shape: p.shape,
+      innerDiameter: si(p.innerDiameter, 'length'),
+      turns: p.turns,
+      conductorDiameter: si(p.conductorDiameter, 'length'),
+      spacing: si(p.spacing, 'length'),
+      angle: p.shape === 'conical' && p.angle !== undefined ? si(p.angle, 'angle') : null,
+      elevation: p.elevation === undefined ? 0 : si(p.elevation, 'length'),
+    };
+  }
+
+  let tank: TankSI | null = null;
+  if (d.tank) {
+    tank =
+      'capacitance' in d.tank
+        ? { kind: 'single', capacitance: si(d.tank.capacitance, 'capacitance') }
+        : {
+            kind: 'bank',
+            unitCapacitance: si(d.tank.unitCapacitance, 'capacitance'),
+            unitVoltage: si(d.tank.unitVoltage, 'voltage'),
+            series: d.tank.series,
+            parallel: d.tank.parallel,
+          };
+  }
+
+  let supply: SupplySI | null = null;
+  if (d.supply) {
+    supply =
+      d.supply.kind === 'transformer'
+        ? {
+            kind: 'transformer',
+            voltage: si(d.supply.voltage, 'voltage'),
+            current: si(d.supply.current, 'current'),
+            lineFrequency: si(d.supply.lineFrequency, 'frequency'),
+            breakRate: d.supply.breakRate === undefined ? null : si(d.supply.breakRate, 'frequency'),
+          }
+        : { kind: 'solid-state', busVoltage: si(d.supply.busVoltage, 'voltage') };
+  }
+
+  const t = d.tuning ?? {};
+  const streamerLength = t.streamerLength === undefined ? null : si(t.streamerLength, 'length');
+  const streamerCapacitance =
+    t.streamerCapacitance !== undefined
+      ? si(t.streamerCapacitance, 'capacitance')
+      : streamerLength !== null
+        ? streamerCapacitanceForLength(streamerLength)
+        : 0;
+
+  return {
+    secondary: {
+      formDiameter: si(s.formDiameter, 'length'),
+      turns: s.turns,
+      wire,
+      windingLength: s.windingLength === undefined ? null : si(s.windingLength, 'length'),
+      elevation: s.elevation === undefined ? 0 : si(s.elevation, 'length'),
+    },
+    groundClearance: d.groundClearance === undefined ? DEFAULT_GROUND_CLEARANCE : si(d.groundClearance, 'length'),
+    topload,
+    primary,
+    tank,
+    supply,
+    tuning: { streamerCapacitance, streamerLength, targetCoupling: t.targetCoupling ?? null },
+  };
+}
+
+/** One line per issue, "path: message", for terminals and logs. */
+export function formatIssues(issues: readonly DesignIssue[]): string {
+  return issues.map((i) => `${i.path || '(design)'}: ${i.message}`).join('\n');
+}
+
+function pathString(path: ReadonlyArray<PropertyKey>): string {
+  return path.map((p) => (typeof p === 'number' ? `[${p}]` : String(p))).join('.').replace(/\.\[/g, '[');
+}
+
+function valueAt(root: unknown, path: ReadonlyArray<PropertyKey>): unknown {
+  let v = root;
+  for (const p of path) {
+    if (v === null || typeof v !== 'object') return undefined;
+    v = (v as Record<PropertyKey, unknown>)[p];
+  }
+  return v;
+}
+
+/** Turns zod's issues into plain per-field messages; unions of objects report the branch the input meant. */
+function plainIssues(issue: Issue, base: ReadonlyArray<PropertyKey>, root: unknown): DesignIssue[] {
+  const path = [...base, ...issue.path];
+  const at = valueAt(root, path);
+  if (issue.code === 'invalid_union' && at !== null && typeof at === 'object' && !Array.isArray(at) && issue.errors.length > 0) {
+    const branches = issue.errors;
+    let best = branches[0];
+    for (const br of branches) if (br.length < best.length) best = br;
+    return best.flatMap((i) => plainIssues(i, path, root));
+  }
+  if (issue.code === 'unrecognized_keys') {
+    return issue.keys.map((key) => {
+      const hint = closest(key);
+      return {
+        path: pathString([...path, key]),
+        message: `is not a known field${hint ? ` (did you mean "${hint}"?)` : ''}`,
+      };
+    });
+  }
+  if (issue.code === 'invalid_type' && at === undefined) return [{ path: pathString(path), message: 'is required' }];
+  if (issue.code === 'invalid_type' && issue.expected === 'object') {
+    return [{ path: pathString(path), message: at === null ? 'must be an object, not null' : 'expected an object with fields' }];
+  }
+  if (issue.code === 'invalid_union' && issue.message === 'Invalid input') {
+    return [{ path: pathString(path), message: 'has an unexpected form' }];
+  }
+  return [{ path: pathString(path), message: issue.message }];
+}
+
+function dedupe(issues: DesignIssue[]): DesignIssue[] {
+  const seen = new Set<string>();
+  return issues.filter((i) => {
+    const k = `${i.path}\u0000${i.message}`;
+    if (seen.has(k)) return false;
+    seen.add(k);
+    return true;
+  });
+}
+
+function closest(key: string): string | null {
+  let best: string | null = null;
+  let bestD = Infinity;
+  for (const f of KNOWN_FIELDS) {
+    const d = editDistance(key.toLowerCase(), f.toLowerCase());
+    if (d < bestD) {
+      bestD = d;
+      best = f;
+    }
+  }
+  return bestD <= Math.max(1, Math.floor(key.length / 3)) ? best : null;
+}
+
+function editDistance(a: string, b: string): number {
+  const row = Array.from({ length: b.length + 1 }, (_, j) => j);
+  for (let i = 1; i <= a.length; i++) {
+    let prev = row[0];
+    row[0] = i;
+    for (let j = 1; j <= b.length; j++) {
+      const tmp = row[j];
+      row[j] = Math.min(row[j] + 1, row[j - 1] + 1, prev + (a[i - 1] === b[j - 1] ? 0 : 1));
+      prev = tmp;
+    }
+  }
+  return row[b.length];
+}

@@ -1,0 +1,101 @@
+import { formatFixed, formatSignificant, MISSING } from './number';
+import { formatSi } from './si';
+import { formatLength, type UnitSystem } from './length';
+
+/** The result quantities the designer shows, each with the unit and precision a builder reads it in. */
+export type DisplayKind =
+  | 'frequency'
+  | 'inductance'
+  | 'capacitance'
+  | 'resistance'
+  | 'voltage'
+  | 'current'
+  | 'energy'
+  | 'power'
+  | 'time'
+  | 'mass'
+  | 'length'
+  | 'wireLength'
+  | 'ratio'
+  | 'coupling'
+  | 'turns'
+  | 'count'
+  | 'angle';
+
+export interface FormatOptions {
+  system?: UnitSystem;
+  digits?: number;
+}
+
+const CAPACITANCE_PREFIXES = ['p', 'n', 'µ', 'm', ''] as const;
+const INDUCTANCE_PREFIXES = ['n', 'µ', 'm', ''] as const;
+
+/** Formats an SI value for display. Unit choice: SI prefixes, lengths in the user's system. */
+export function formatQuantity(x: number | null | undefined, kind: DisplayKind, options: FormatOptions = {}): string {
+  if (x === null || x === undefined || !Number.isFinite(x)) return MISSING;
+  const system = options.system ?? 'metric';
+  const digits = options.digits ?? 4;
+  switch (kind) {
+    case 'frequency':
+      return formatSi(x, 'Hz', digits);
+    case 'inductance':
+      return formatSi(x, 'H', digits, INDUCTANCE_PREFIXES);
+    case 'capacitance':
+      return formatSi(x, 'F', digits, CAPACITANCE_PREFIXES);
+    case 'resistance':
+      return formatSi(x, 'Ω', digits);
+    case 'voltage':
+      return formatSi(x, 'V', digits);
+    case 'current':
+      return formatSi(x, 'A', digits);
+    case 'energy':
+      return formatSi(x, 'J', digits);
+    case 'power':
+      return formatSi(x, 'W', digits);
+    case 'time':
+      return formatSi(x, 's', digits);
+    case 'mass':
+      return system === 'imperial' ? `${formatSignificant(x / 0.45359237, digits - 1)} lb` : x < 1 ? `${formatSignificant(x * 1000, digits - 1)} g` : `${formatSignificant(x, digits - 1)} kg`;
+    case 'length':
+      return formatLength(x, system, digits);
+    case 'wireLength':
+      return formatLength(x, system, digits, 'run');
+    case 'ratio':
+      return formatFixed(x, 2);
+    case 'coupling':
+      return formatFixed(x, 3);
+    case 'turns':
+      return formatFixed(x, 2);
+    case 'count':
+      return formatFixed(x, 0);
+    case 'angle':
+      return `${formatSignificant((x * 180) / Math.PI, 3)}°`;
+  }
+}
+
+/** Unit label for an axis or a CSV header: "kHz", "mm", "in", "pF"… picked once for a whole series. */
+export function axisUnit(kind: DisplayKind, system: UnitSystem = 'metric'): { unit: string; factor: number } {
+  switch (kind) {
+    case 'frequency':
+      return { unit: 'kHz', factor: 1e-3 };
+    case 'inductance':
+      return { unit: 'mH', factor: 1e3 };
+    case 'capacitance':
+      return { unit: 'pF', factor: 1e12 };
+    case 'length':
+    case 'wireLength':
+      return system === 'imperial' ? { unit: 'in', factor: 1 / 0.0254 } : { unit: 'mm', factor: 1e3 };
+    case 'time':
+      return { unit: 'µs', factor: 1e6 };
+    case 'energy':
+      return { unit: 'J', factor: 1 };
+    case 'voltage':
+      return { unit: 'kV', factor: 1e-3 };
+    case 'current':
+      return { unit: 'mA', factor: 1e3 };
+    case 'angle':
+      return { unit: 'deg', factor: 180 / Math.PI };
+    default:
+      return { unit: '', factor: 1 };
+  }
+}

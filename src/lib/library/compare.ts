@@ -1,0 +1,42 @@
+import { keyFigures, figureValue } from './figures';
+import { flatten, formatInput, inputLabel } from './inputs';
+import { formatSI, formatTurns } from './format';
+
+export type InputChange = { path: string; label: string; from: string; to: string };
+export type FigureChange = {
+  key: string;
+  label: string;
+  unit: string;
+  from: number | null;
+  to: number | null;
+  fromText: string;
+  toText: string;
+  /** relative change (to − from) / from; null when either side is missing or from is 0 */
+  relative: number | null;
+  changed: boolean;
+};
+
+function show(value: number | null, unit: string): string {
+  return unit === 'turns' ? formatTurns(value) : formatSI(value, unit);
+}
+
+/** What changed between two designs' inputs, and what that did to the key results. */
+export function compareDesigns(a: { design: unknown; result: unknown }, b: { design: unknown; result: unknown }) {
+  const fa = flatten(a.design);
+  const fb = flatten(b.design);
+  const paths = [...new Set([...fa.keys(), ...fb.keys()])].sort();
+  const inputs: InputChange[] = [];
+  for (const p of paths) {
+    const va = fa.get(p);
+    const vb = fb.get(p);
+    if (JSON.stringify(va) === JSON.stringify(vb)) continue;
+    inputs.push({ path: p, label: inputLabel(p), from: formatInput(p, va), to: formatInput(p, vb) });
+  }
+  const figures: FigureChange[] = keyFigures.map((f) => {
+    const from = figureValue(a.result, f);
+    const to = figureValue(b.result, f);
+    const relative = from !== null && to !== null && from !== 0 ? (to - from) / Math.abs(from) : null;
+    return { key: f.key, label: f.label, unit: f.unit, from, to, fromText: show(from, f.unit), toText: show(to, f.unit), relative, changed: from !== to };
+  });
+  return { inputs, figures };
+}

@@ -1,0 +1,8 @@
+import { physicsCases } from './cases-physics';
+import { systemCases } from './cases-system';
+import type { ReferenceCase } from './types';
+
+export type { ReferenceCase, ReferenceKind } from './types';
+
+/** Every reference case, physics primitives first; append new families by concatenation here. */
+export const referenceCases: ReferenceCase[] = [...physicsCases, ...systemCases];

@@ -1,0 +1,12 @@
+import type { APIRoute } from 'astro';
+import { getDb } from '../../../../../server/db';
+import { handle, requireUser } from '../../../../../server/http';
+import { readOptionalJson } from '../../../../../server/optional-json';
+import { duplicateDesign } from '../../../../../server/services/revisions';
+
+export const prerender = false;
+
+export const POST: APIRoute = handle(async ({ locals, params, request }) => {
+  const u = requireUser(locals);
+  return Response.json(await duplicateDesign(getDb(), u, params.id!, await readOptionalJson(request)), { status: 201 });
+});

@@ -1,0 +1,24 @@
+import type { APIRoute } from 'astro';
+import { getDb } from '../../../../../../server/db';
+import { ApiError, handle, readJson, requireUser } from '../../../../../../server/http';
+import { allow } from '../../../../../../server/rate-limit';
+import { siteOrigin } from '../../../../../../server/site-url';
+import { createInvitation, listInvitations } from '../../../../../../server/services/invitations';
+
+export const prerender = false;
+
+// Each invitation sends a mail; a short burst is fine, a flood is not.
+const PER_MINUTE = 20;
+
+export const GET: APIRoute = handle(async ({ locals, params }) => {
+  const u = requireUser(locals);
+  return Response.json({ invitations: await listInvitations(getDb(), u, params.id!) });
+});
+
+export const POST: APIRoute = handle(async ({ locals, params, request }) => {
+  const u = requireUser(locals);
+  if (!allow('invite', u.id, PER_MINUTE)) throw new ApiError('rate_limited');
+  // Links in mail use the configured site address, never the request's Host header.
+  const created = await createInvitation(getDb(), u, params.id!, await readJson(request), siteOrigin());
+  return Response.json(created, { status: 201 });
+});

@@ -1,0 +1,17 @@
+import type { APIRoute } from 'astro';
+import { getDb } from '../../../../../../server/db';
+import { handle, requireUser } from '../../../../../../server/http';
+import { createShare, listShares } from '../../../../../../server/services/designs';
+import { siteOrigin } from '../../../../../../server/site-url';
+
+export const prerender = false;
+
+export const GET: APIRoute = handle(async ({ locals, params }) => {
+  const u = requireUser(locals);
+  return Response.json({ shares: await listShares(getDb(), u, params.id!, siteOrigin()) });
+});
+
+export const POST: APIRoute = handle(async ({ locals, params }) => {
+  const u = requireUser(locals);
+  return Response.json(await createShare(getDb(), u, params.id!, siteOrigin()), { status: 201 });
+});

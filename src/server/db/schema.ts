@@ -1,0 +1,201 @@
+import { sqliteTable, text, integer, real, index, uniqueIndex, primaryKey } from 'drizzle-orm/sqlite-core';
+import { sql } from 'drizzle-orm';
+
+const now = sql`(cast(unixepoch('subsecond') * 1000 as integer))`;
+const createdAt = () => integer('created_at', { mode: 'timestamp_ms' }).default(now).notNull();
+const updatedAt = () =>
+  integer('updated_at', { mode: 'timestamp_ms' })
+    .default(now)
+    .$onUpdate(() => new Date())
+    .notNull();
+
+// better-auth's own tables keep its singular names.
+export const user = sqliteTable('user', {
+  id: text('id').primaryKey(),
+  name: text('name').notNull(),
+  email: text('email').notNull().unique(),
+  emailVerified: integer('email_verified', { mode: 'boolean' }).default(false).notNull(),
+  image: text('image'),
+  createdAt: createdAt(),
+  updatedAt: updatedAt(),
+  role: text('role').default('member'),
+  banned: integer('banned', { mode: 'boolean' }).default(false),
+  banReason: text('ban_reason'),
+  banExpires: integer('ban_expires', { mode: 'timestamp_ms' }),
+  unitSystem: text('unit_system').default('metric').notNull(),
+});
+
+export const session = sqliteTable(
+  'session',
+  {
+    id: text('id').primaryKey(),
+    expiresAt: integer('expires_at', { mode: 'timestamp_ms' }).notNull(),
+    token: text('token').notNull().unique(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+    ipAddress: text('ip_address'),
+    userAgent: text('user_agent'),
+    userId: text('user_id')
+      .notNull()
+      .references(() => user.id, { onDelete: 'cascade' }),
+    impersonatedBy: text('impersonated_by'),
+  },
+  (t) => [index('session_user_id_idx').on(t.userId)],
+);
+
+export const account = sqliteTable(
+  'account',
+  {
+    id: text('id').primaryKey(),
+    accountId: text('account_id').notNull(),
+    providerId: text('provider_id').notNull(),
+    userId: text('user_id')
+      .notNull()
+      .references(() => user.id, { onDelete: 'cascade' }),
+    accessToken: text('access_token'),
+    refreshToken: text('refresh_token'),
+    idToken: text('id_token'),
+    accessTokenExpiresAt: integer('access_token_expires_at', { mode: 'timestamp_ms' }),
+    refreshTokenExpiresAt: integer('refresh_token_expires_at', { mode: 'timestamp_ms' }),
+    scope: text('scope'),
+    password: text('password'),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index('account_user_id_idx').on(t.userId)],
+);
+
+export const verification = sqliteTable(
+  'verification',
+  {
+    id: text('id').primaryKey(),
+    identifier: text('identifier').notNull(),
+    value: text('value').notNull(),
+    expiresAt: integer('expires_at', { mode: 'timestamp_ms' }).notNull(),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index('verification_identifier_idx').on(t.identifier)],
+);
+
+// Coilwright's tables.
+export const designs = sqliteTable(
+  'designs',
+  {
+    id: text('id').primaryKey(),
+    ownerId: text('owner_id')
+      .notNull()
+      .references(() => user.id, { onDelete: 'cascade' }),
+    name: text('name').notNull(),
+    design: text('design', { mode: 'json' }).notNull(),
+    revision: integer('revision').notNull().default(1),
+    // Measured values a builder adopted in place of predictions (JSON: { loadedFrequency?: number, ... }).
+    calibration: text('calibration', { mode: 'json' }),
+    createdAt: createdAt(),
+    updatedAt: updatedAt(),
+  },
+  (t) => [index('designs_owner_idx').on(t.ownerId)],
+);
+
+export const designRevisions = sqliteTable(
+  'design_revisions',
+  {
+    id: text('id').primaryKey(),
+    designId: text('design_id')
+      .notNull()
+      .references(() => designs.id, { onDelete: 'cascade' }),
+    revision: integer('revision').notNull(),
+    name: text('name').notNull(),
+    design: text('design', { mode: 'json' }).notNull(),
+    resultSummary: text('result_summary', { mode: 'json' }),
+    authorId: text('author_id').references(() => user.id, { onDelete: 'set null' }),
+    message: text('message'),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex('design_revisions_design_rev_idx').on(t.designId, t.revision)],
+);
+
+export const designMembers = sqliteTable(
+  'design_members',
+  {
+    designId: text('design_id')
+      .notNull()
+      .references(() => designs.id, { onDelete: 'cascade' }),
+    userId: text('user_id')
+      .notNull()
+      .references(() => user.id, { onDelete: 'cascade' }),
+    role: text('role', { enum: ['editor', 'viewer'] }).notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [primaryKey({ columns: [t.designId, t.userId] })],
+);
+
+export const designInvitations = sqliteTable(
+  'design_invitations',
+  {
+    id: text('id').primaryKey(),
+    designId: text('design_id')
+      .notNull()
+      .references(() => designs.id, { onDelete: 'cascade' }),
+    email: text('email').notNull(),
+    role: text('role', { enum: ['editor', 'viewer'] }).notNull(),
+    tokenHash: text('token_hash').notNull().unique(),
+    invitedBy: text('invited_by').references(() => user.id, { onDelete: 'set null' }),
+    createdAt: createdAt(),
+    acceptedAt: integer('accepted_at', { mode: 'timestamp_ms' }),
+    acceptedBy: text('accepted_by').references(() => user.id, { onDelete: 'set null' }),
+  },
+  (t) => [index('design_invitations_design_idx').on(t.designId)],
+);
+
+export const designShares = sqliteTable(
+  'design_shares',
+  {
+    token: text('token').primaryKey(),
+    designId: text('design_id')
+      .notNull()
+      .references(() => designs.id, { onDelete: 'cascade' }),
+    createdBy: text('created_by').references(() => user.id, { onDelete: 'set null' }),
+    createdAt: createdAt(),
+    revokedAt: integer('revoked_at', { mode: 'timestamp_ms' }),
+  },
+  (t) => [index('design_shares_design_idx').on(t.designId)],
+);
+
+export const measurements = sqliteTable(
+  'measurements',
+  {
+    id: text('id').primaryKey(),
+    designId: text('design_id')
+      .notNull()
+      .references(() => designs.id, { onDelete: 'cascade' }),
+    kind: text('kind').notNull(),
+    value: real('value').notNull(),
+    unit: text('unit').notNull(),
+    measuredAt: integer('measured_at', { mode: 'timestamp_ms' }).notNull(),
+    instrument: text('instrument'),
+    notes: text('notes'),
+    authorId: text('author_id').references(() => user.id, { onDelete: 'set null' }),
+    createdAt: createdAt(),
+  },
+  (t) => [index('measurements_design_idx').on(t.designId)],
+);
+
+export const attachments = sqliteTable(
+  'attachments',
+  {
+    id: text('id').primaryKey(),
+    designId: text('design_id')
+      .notNull()
+      .references(() => designs.id, { onDelete: 'cascade' }),
+    fileName: text('file_name').notNull(),
+    contentType: text('content_type').notNull(),
+    size: integer('size').notNull(),
+    kind: text('kind', { enum: ['photo', 'instrument'] }).notNull(),
+    storageKey: text('storage_key').notNull(),
+    thumbnailKey: text('thumbnail_key'),
+    uploadedBy: text('uploaded_by').references(() => user.id, { onDelete: 'set null' }),
+    createdAt: createdAt(),
+  },
+  (t) => [index('attachments_design_idx').on(t.designId)],
+);

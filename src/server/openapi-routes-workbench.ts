@@ -1,0 +1,3 @@
+import type { RouteDoc } from './openapi-types';
+
+export const workbenchRoutes: RouteDoc[] = [];

@@ -1,0 +1,121 @@
+import { and, desc, eq, isNull, sql } from 'drizzle-orm';
+import { createHash, randomBytes, randomUUID } from 'node:crypto';
+import { z } from 'zod';
+import type { Db } from '../db/client';
+import { designs, designInvitations, designMembers, user } from '../db/schema';
+import type { SessionUser } from '../session';
+import { ApiError } from '../http';
+import { actionMail, sendMail } from '../mail';
+import { authorize, parseBody } from './designs';
+import { memberRoleSchema } from './members';
+
+export const createInvitationBody = z.object({
+  email: z.email({ error: 'Enter a valid e-mail address.' }).trim().toLowerCase().max(254, 'Enter a valid e-mail address.'),
+  role: memberRoleSchema,
+});
+
+/** An invitation link stays valid for two weeks; after that the owner sends a new one. */
+export const INVITATION_LIFETIME_MS = 14 * 24 * 3600 * 1000;
+
+export function hashToken(token: string): string {
+  return createHash('sha256').update(token).digest('hex');
+}
+
+const tokenShape = /^[A-Za-z0-9_-]{16,64}$/;
+
+export async function createInvitation(db: Db, u: SessionUser, designId: string, body: unknown, origin: string) {
+  const { row } = await authorize(db, designId, u, 'invite');
+  if (!u.emailVerified) throw new ApiError('email_not_verified');
+  const b = parseBody(createInvitationBody, body);
+  const invitee = await db.query.user.findFirst({ where: sql`lower(${user.email}) = ${b.email}` });
+  if (invitee) {
+    const already = invitee.id === row.ownerId || (await db.query.designMembers.findFirst({ where: and(eq(designMembers.designId, designId), eq(designMembers.userId, invitee.id)) }));
+    if (already) throw new ApiError('conflict', 'This person already has a role on the design; change it on the People page.', [{ path: 'email', message: 'Already has a role on this design.' }]);
+  }
+  const token = randomBytes(24).toString('base64url'); // 192 bits; only its hash is stored
+  const id = randomUUID();
+  await db.insert(designInvitations).values({ id, designId, email: b.email, role: b.role, tokenHash: hashToken(token), invitedBy: u.id });
+  const url = `${origin}/invitations/${token}`;
+  const roleWords = b.role === 'editor' ? 'edit it and save revisions' : 'read it';
+  await sendMail(
+    actionMail(
+      b.email,
+      `Invitation to the coil design “${row.name}”`,
+      [
+        `${u.name || u.email} invites you to work on the coil design “${row.name}” on Coilwright as ${b.role === 'editor' ? 'an editor' : 'a viewer'}: you will be able to ${roleWords}.`,
+        'Open the link to accept. If you have no Coilwright account yet, you can make one on the way; the link works for two weeks.',
+        'If you did not expect this, ignore the message: nothing happens unless you accept.',
+      ],
+      { label: 'Accept the invitation', url },
+    ),
+  );
+  return { id, email: b.email, role: b.role, createdAt: new Date().toISOString() };
+}
+
+export async function listInvitations(db: Db, u: SessionUser, designId: string) {
+  await authorize(db, designId, u, 'invite');
+  const rows = await db
+    .select()
+    .from(designInvitations)
+    .where(and(eq(designInvitations.designId, designId), isNull(designInvitations.acceptedAt)))
+    .orderBy(desc(designInvitations.createdAt));
+  const now = Date.now();
+  return rows.map((i) => ({
+    id: i.id,
+    email: i.email,
+    role: i.role,
+    createdAt: i.createdAt.toISOString(),
+    expired: now - i.createdAt.getTime() > INVITATION_LIFETIME_MS,
+  }));
+}
+
+export async function revokeInvitation(db: Db, u: SessionUser, designId: string, invitationId: string) {
+  await authorize(db, designId, u, 'invite');
+  const res = await db
+    .delete(designInvitations)
+    .where(and(eq(designInvitations.designId, designId), eq(designInvitations.id, invitationId), isNull(designInvitations.acceptedAt)))
+    .returning({ id: designInvitations.id });
+  if (res.length === 0) throw new ApiError('not_found', 'No such open invitation.');
+}
+
+const gone = () => new ApiError('not_found', 'This invitation does not exist, was withdrawn, was already used or has expired.');
+
+async function openInvitation(db: Db, token: string) {
+  if (!tokenShape.test(token)) throw gone();
+  const inv = await db.query.designInvitations.findFirst({ where: eq(designInvitations.tokenHash, hashToken(token)) });
+  if (!inv || inv.acceptedAt || Date.now() - inv.createdAt.getTime() > INVITATION_LIFETIME_MS) throw gone();
+  const d = await db.query.designs.findFirst({ where: eq(designs.id, inv.designId) });
+  if (!d) throw gone();
+  return { inv, d };
+}
+
+/** What the accept page shows: the design's name, the role and who invited; the token itself is the proof. */
+export async function describeInvitation(db: Db, token: string) {
+  const { inv, d } = await openInvitation(db, token);
+  const inviter = inv.invitedBy ? await db.query.user.findFirst({ where: eq(user.id, inv.invitedBy) }) : undefined;
+  return { designName: d.name, role: inv.role, email: inv.email, invitedBy: inviter?.name ?? null };
+}
+
+/**
+ * Adds the signed-in person to the design with the invited role. The link is single-use. A person who already
+ * owns the design keeps ownership; an existing member takes the invited role.
+ */
+export async function acceptInvitation(db: Db, u: SessionUser, token: string) {
+  const { inv, d } = await openInvitation(db, token);
+  if (d.ownerId === u.id) throw new ApiError('conflict', 'You own this design already.');
+  const done = await db.transaction(async (tx) => {
+    const claimed = await tx
+      .update(designInvitations)
+      .set({ acceptedAt: new Date(), acceptedBy: u.id })
+      .where(and(eq(designInvitations.id, inv.id), isNull(designInvitations.acceptedAt)))
+      .returning({ id: designInvitations.id });
+    if (claimed.length === 0) return false;
+    await tx
+      .insert(designMembers)
+      .values({ designId: d.id, userId: u.id, role: inv.role })
+      .onConflictDoUpdate({ target: [designMembers.designId, designMembers.userId], set: { role: inv.role } });
+    return true;
+  });
+  if (!done) throw gone();
+  return { designId: d.id, name: d.name, role: inv.role };
+}

@@ -1,0 +1,49 @@
+import { inductanceSolenoidLorenz, inductanceSolenoidRoundWire, inductanceSolenoidWheeler1928 } from '../secondary/inductance';
+import { selfCapacitanceMedhurst } from '../secondary/capacitance';
+import { helixWireLength } from '../wire/length';
+import { copperResistance } from '../wire/resistance';
+import { copperMass } from '../wire/mass';
+import type { SecondarySI } from '../types';
+import { windingDiameter, windingLength } from './geometry';
+
+export interface SecondaryValues {
+  inductance: number;
+  inductanceSheet: number;
+  inductanceWheeler: number;
+  selfCapacitance: number;
+  selfCapacitanceInRange: boolean;
+  wireLength: number;
+  windingLength: number;
+  windingDiameter: number;
+  aspectRatio: number;
+  pitch: number;
+  dcResistance: number;
+  wireMass: number;
+}
+
+/**
+ * Geometry, inductance and self-capacitance of the secondary. Inductance: Lorenz current sheet at
+ * the wire centres with Rosa's round-wire corrections (REFERENCES §a1, §a3); self-capacitance:
+ * Medhurst 1947 (REFERENCES §b1). The wire is copper.
+ */
+export function evaluateSecondary(s: SecondarySI): SecondaryValues {
+  const D = windingDiameter(s);
+  const r = D / 2;
+  const len = windingLength(s);
+  const wireLength = helixWireLength(s.turns, D, len);
+  const c = selfCapacitanceMedhurst(D, len);
+  return {
+    inductance: inductanceSolenoidRoundWire(s.turns, r, len, s.wire.diameter),
+    inductanceSheet: inductanceSolenoidLorenz(s.turns, r, len),
+    inductanceWheeler: inductanceSolenoidWheeler1928(s.turns, r, len),
+    selfCapacitance: c.capacitance,
+    selfCapacitanceInRange: c.inRange,
+    wireLength,
+    windingLength: len,
+    windingDiameter: D,
+    aspectRatio: len / D,
+    pitch: len / s.turns,
+    dcResistance: copperResistance(wireLength, s.wire.diameter),
+    wireMass: copperMass(wireLength, s.wire.diameter),
+  };
+}

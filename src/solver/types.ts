@@ -1,0 +1,287 @@
+/**
+ * Shapes of the solver's input (a design resolved into SI base units) and of its result.
+ * Every length is in metres, capacitance in farads, inductance in henries, frequency in hertz,
+ * voltage in volts, current in amperes, time in seconds, angle in radians, energy in joules.
+ */
+
+export type InsulationBuild = 'bare' | 'single' | 'heavy';
+export type PrimaryShape = 'flat' | 'helical' | 'conical';
+
+export interface WireSI {
+  /** bare copper diameter */
+  diameter: number;
+  /** outside diameter over the enamel: the winding pitch when close-wound */
+  insulatedDiameter: number;
+  /** gauge when the wire was given by AWG, otherwise null */
+  awg: number | null;
+  insulation: InsulationBuild | null;
+}
+
+export interface SecondarySI {
+  formDiameter: number;
+  turns: number;
+  wire: WireSI;
+  /** null: close-wound, turns × insulated diameter */
+  windingLength: number | null;
+  /** bottom of the winding above the primary reference plane */
+  elevation: number;
+}
+
+export interface ToroidSI {
+  shape: 'toroid';
+  /** overall outside diameter */
+  majorDiameter: number;
+  /** tube (cross-section) diameter */
+  minorDiameter: number;
+  /** centre of the topload above the top of the winding */
+  elevation: number;
+}
+
+export interface SphereSI {
+  shape: 'sphere';
+  diameter: number;
+  elevation: number;
+}
+
+export type ToploadSI = ToroidSI | SphereSI;
+
+export interface PrimarySI {
+  shape: PrimaryShape;
+  /** centre-line diameter of the innermost turn */
+  innerDiameter: number;
+  /** may be fractional */
+  turns: number;
+  conductorDiameter: number;
+  /** gap between neighbouring conductor surfaces */
+  spacing: number;
+  /** conical only: rise above horizontal; null for flat and helical */
+  angle: number | null;
+  /** height of the innermost turn above the primary reference plane */
+  elevation: number;
+}
+
+export interface TankSingleSI {
+  kind: 'single';
+  capacitance: number;
+}
+
+export interface TankBankSI {
+  kind: 'bank';
+  unitCapacitance: number;
+  unitVoltage: number;
+  series: number;
+  parallel: number;
+}
+
+export type TankSI = TankSingleSI | TankBankSI;
+
+export interface TransformerSupplySI {
+  kind: 'transformer';
+  /** RMS output voltage */
+  voltage: number;
+  /** RMS short-circuit (rated) output current */
+  current: number;
+  lineFrequency: number;
+  /** gap firings per second; null when not given */
+  breakRate: number | null;
+}
+
+export interface SolidStateSupplySI {
+  kind: 'solid-state';
+  busVoltage: number;
+}
+
+export type SupplySI = TransformerSupplySI | SolidStateSupplySI;
+
+export interface TuningSI {
+  /** allowance added to the topload for streamers; 0 when not given */
+  streamerCapacitance: number;
+  /** expected streamer length, when the allowance was derived from it */
+  streamerLength: number | null;
+  targetCoupling: number | null;
+}
+
+export interface DesignSI {
+  secondary: SecondarySI;
+  /** height of the primary reference plane above the ground plane */
+  groundClearance: number;
+  topload: ToploadSI | null;
+  primary: PrimarySI | null;
+  tank: TankSI | null;
+  supply: SupplySI | null;
+  tuning: TuningSI;
+}
+
+/** A problem with a design that makes it impossible to build or to compute. */
+export interface DesignIssue {
+  path: string;
+  message: string;
+}
+
+export interface SolverWarning {
+  code: string;
+  path: string;
+  message: string;
+}
+
+export interface SecondaryResult {
+  inductance: number;
+  selfCapacitance: number;
+  resonantFrequency: number;
+  wireLength: number;
+  windingLength: number;
+  aspectRatio: number;
+  dcResistance: number;
+  wireMass: number;
+  windingDiameter: number;
+  pitch: number;
+  /** current-sheet value before the round-wire corrections */
+  inductanceSheet: number;
+  /** Wheeler 1928 (SI form), for comparison */
+  inductanceWheeler: number;
+  /** Medhurst's table covers this aspect ratio */
+  selfCapacitanceInRange: boolean;
+  /** skin-effect resistance of the straight wire at the loaded frequency (no proximity factor) */
+  acResistance: number | null;
+  /** ωL/R_ac at the loaded frequency: an upper bound, since proximity and dielectric losses are left out */
+  q: number | null;
+}
+
+export interface ToploadResult {
+  capacitance: number;
+  centreHeightAboveGround: number;
+  /** the trade's empirical toroid formula (isolated, common practice), for comparison; null for a sphere */
+  empirical: number | null;
+}
+
+export interface SystemResult {
+  resonantFrequency: number;
+  quarterWaveFrequency: number;
+  /** self-capacitance + topload, the lumped model's total */
+  totalCapacitance: number;
+  model: string;
+}
+
+export interface PrimaryResult {
+  inductance: number;
+  conductorLength: number;
+  outerDiameter: number;
+  /** null when no tap was found */
+  inductanceAtTap: number | null;
+  conductorLengthAtTap: number | null;
+}
+
+export interface CouplingResult {
+  mutualInductance: number;
+  k: number;
+  /** k with only the turns up to the tap in circuit */
+  kAtTap: number | null;
+  mutualInductanceAtTap: number | null;
+  /** secondary elevation that gives tuning.targetCoupling with all turns; null when not asked or unreachable */
+  elevationForTargetCoupling: number | null;
+}
+
+export interface TuningResult {
+  targetFrequency: number;
+  tapTurns: number | null;
+  inRange: boolean;
+  streamerCapacitance: number;
+  /** primary + tank frequency with every turn in circuit */
+  primaryFrequencyAllTurns: number;
+  /** inductance the primary needs at the tap */
+  requiredInductance: number;
+}
+
+export interface BleederResult {
+  /** suggested resistance across each capacitor */
+  resistancePerUnit: number;
+  count: number;
+  /** dissipation in each resistor at the supply peak */
+  powerPerUnit: number;
+  /** R·C of each unit: the bank falls to about 1 % after 4.6 of these */
+  timeConstant: number;
+}
+
+export interface TankResult {
+  capacitance: number;
+  voltageRating: number | null;
+  energyAtSupplyPeak: number | null;
+  unitVoltage: number | null;
+  units: number | null;
+  /** share of the supply peak across each capacitor of a string */
+  perUnitVoltage: number | null;
+  /** voltage rating over supply peak */
+  ratingMargin: number | null;
+  bleeder: BleederResult | null;
+  caution: string;
+}
+
+export interface SupplyResult {
+  resonantCapacitance: number | null;
+  kind: 'transformer' | 'solid-state';
+  peakVoltage: number;
+  /** V/I of a current-limited transformer */
+  impedance: number | null;
+  ratedPower: number | null;
+  /** 1/(4 f Z): charges to full peak in a quarter-cycle */
+  ltrCapacitance: number | null;
+  /** tank capacitance over the resonant value */
+  tankToResonantRatio: number | null;
+  breakRate: number | null;
+  energyPerBang: number | null;
+  powerAtBreakRate: number | null;
+  /** Freau's rule of thumb, transformer supplies only */
+  sparkLengthEstimate: number | null;
+  /** the input power the spark-length rule was fed */
+  sparkLengthPower: number | null;
+  sparkLengthNote: string | null;
+  caution: string;
+}
+
+export interface ResponseResult {
+  f0: number;
+  k: number;
+  fLow: number;
+  fHigh: number;
+  /** first null of the primary envelope, 1/(2(fHigh − fLow)) */
+  transferTime: number;
+  /** first minimum of primary energy found by integrating the lossless pair */
+  firstPrimaryMinimum: number | null;
+  /** primary energy left at that minimum, as a fraction of the initial energy */
+  residualPrimaryEnergy: number | null;
+  halfCyclesToTransfer: number;
+}
+
+export interface UncertaintyContribution {
+  source: string;
+  description: string;
+  /** relative change of the loaded frequency at each end of the source's range (low ≤ 0 ≤ high) */
+  relLow: number;
+  relHigh: number;
+}
+
+export interface UncertaintyResult {
+  loadedFrequency: {
+    nominal: number;
+    low: number;
+    high: number;
+    contributions: UncertaintyContribution[];
+  };
+  /** tap positions for the ends of the frequency band and the primary model's spread; null without a tap */
+  tapTurns: { low: number | null; high: number | null } | null;
+  method: string;
+}
+
+export interface Result {
+  secondary: SecondaryResult | null;
+  topload: ToploadResult | null;
+  system: SystemResult | null;
+  primary: PrimaryResult | null;
+  coupling: CouplingResult | null;
+  tuning: TuningResult | null;
+  tank: TankResult | null;
+  supply: SupplyResult | null;
+  response: ResponseResult | null;
+  uncertainty: UncertaintyResult | null;
+  warnings: SolverWarning[];
+}

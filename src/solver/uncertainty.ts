@@ -1,0 +1,131 @@
+import { MEDHURST_ACCURACY } from './secondary/capacitance';
+import { resonantFrequencyLC } from './secondary/resonance';
+import type { DesignSI, UncertaintyContribution, UncertaintyResult } from './types';
+import { evaluateSecondary } from './system/secondary';
+import { minimumTap, primaryInductanceAtTap } from './system/primary';
+import { inductanceForResonance, solveTap } from './tuning/tap';
+import { STREAMER_CAPACITANCE_PER_FOOT, STREAMER_CAPACITANCE_PER_FOOT_RANGE } from './tuning/streamer';
+import { SPACE_WOUND_FACTOR } from './system/design-warnings';
+
+/** Stated accuracy of each model and measurement the loaded frequency rests on. */
+export const UNCERTAINTY_SOURCES = {
+  /** Medhurst's own claim for his table, about ±5 % (REFERENCES §b1); doubled outside the table. */
+  selfCapacitance: MEDHURST_ACCURACY,
+  /** Current sheet with Rosa's corrections, close-wound: ±0.5 % (helicity neglected; from memory). */
+  inductanceCloseWound: 0.005,
+  /** Space-wound coils measure up to about 5 % above the corrected current-sheet value (TRADE §3.2). */
+  inductanceSpaceWoundHigh: 0.05,
+  /** Topload BEM is exact for an isolated body over a ground plane; nearby objects and the room: ±5 % (common practice). */
+  toploadSurroundings: 0.05,
+  /** Builder's measurement of the form diameter, ±1 mm by default. */
+  formDiameter: 0.001,
+  /** Ring-model primary inductance, ±1.5 %: the spread of the HF and LF ring models and Wheeler's spiral (REFERENCES §c3). */
+  primaryInductance: 0.015,
+} as const;
+
+export interface UncertaintyBase {
+  inductance: number;
+  selfCapacitance: number;
+  toploadCapacitance: number;
+  streamerCapacitance: number;
+  tankCapacitance: number | null;
+}
+
+export interface UncertaintyOptions {
+  formDiameterTolerance?: number;
+}
+
+/**
+ * Propagates each source's stated range to the loaded frequency (secondary + topload + streamer
+ * allowance) by evaluating the model at the ends of that range, one source at a time, and combines
+ * the sources by root-sum-square on each side. Gives the tap positions for the ends of the band, with
+ * the primary model's spread added in quadrature to the required inductance.
+ */
+export function evaluateUncertainty(d: DesignSI, base: UncertaintyBase, options: UncertaintyOptions = {}): UncertaintyResult {
+  const f = (L: number, cs: number, ct: number, cx: number) => resonantFrequencyLC(L, cs + ct + cx);
+  const nominal = f(base.inductance, base.selfCapacitance, base.toploadCapacitance, base.streamerCapacitance);
+  const rel = (x: number) => x / nominal - 1;
+  const contributions: UncertaintyContribution[] = [];
+  const add = (source: string, description: string, a: number, b: number) => {
+    const ra = rel(a);
+    const rb = rel(b);
+    contributions.push({ source, description, relLow: Math.min(ra, rb, 0), relHigh: Math.max(ra, rb, 0) });
+  };
+
+  const sv = evaluateSecondary(d.secondary);
+  const medhurst = UNCERTAINTY_SOURCES.selfCapacitance * (sv.selfCapacitanceInRange ? 1 : 2);
+  add(
+    'selfCapacitance',
+    `Medhurst self-capacitance ±${pct(medhurst)} (Medhurst 1947, his stated accuracy${sv.selfCapacitanceInRange ? '' : ', doubled: outside his table'})`,
+    f(base.inductance, base.selfCapacitance * (1 - medhurst), base.toploadCapacitance, base.streamerCapacitance),
+    f(base.inductance, base.selfCapacitance * (1 + medhurst), base.toploadCapacitance, base.streamerCapacitance),
+  );
+
+  const spaceWound = sv.pitch > SPACE_WOUND_FACTOR * d.secondary.wire.insulatedDiameter;
+  const lLow = UNCERTAINTY_SOURCES.inductanceCloseWound;
+  const lHigh = spaceWound ? UNCERTAINTY_SOURCES.inductanceSpaceWoundHigh : UNCERTAINTY_SOURCES.inductanceCloseWound;
+  add(
+    'inductance',
+    spaceWound
+      ? 'Secondary inductance −0.5 %/+5 %: space-wound coils measure above the current-sheet value (TRADE §3.2)'
+      : 'Secondary inductance ±0.5 %: current sheet with Rosa corrections, helicity neglected (from memory)',
+    f(base.inductance * (1 - lLow), base.selfCapacitance, base.toploadCapacitance, base.streamerCapacitance),
+    f(base.inductance * (1 + lHigh), base.selfCapacitance, base.toploadCapacitance, base.streamerCapacitance),
+  );
+
+  if (base.toploadCapacitance > 0) {
+    const u = UNCERTAINTY_SOURCES.toploadSurroundings;
+    add(
+      'toploadSurroundings',
+      'Topload capacitance ±5 %: nearby objects and the room, which the ground-plane model leaves out (common practice)',
+      f(base.inductance, base.selfCapacitance, base.toploadCapacitance * (1 - u), base.streamerCapacitance),
+      f(base.inductance, base.selfCapacitance, base.toploadCapacitance * (1 + u), base.streamerCapacitance),
+    );
+  }
+
+  if (base.streamerCapacitance > 0) {
+    const lo = STREAMER_CAPACITANCE_PER_FOOT_RANGE.low / STREAMER_CAPACITANCE_PER_FOOT;
+    const hi = STREAMER_CAPACITANCE_PER_FOOT_RANGE.high / STREAMER_CAPACITANCE_PER_FOOT;
+    add(
+      'streamerAllowance',
+      'Streamer allowance 0.8–2 pF per foot instead of 1 pF per foot (TRADE §2.8)',
+      f(base.inductance, base.selfCapacitance, base.toploadCapacitance, base.streamerCapacitance * lo),
+      f(base.inductance, base.selfCapacitance, base.toploadCapacitance, base.streamerCapacitance * hi),
+    );
+  }
+
+  const tol = options.formDiameterTolerance ?? UNCERTAINTY_SOURCES.formDiameter;
+  const atForm = (delta: number) => {
+    const v = evaluateSecondary({ ...d.secondary, formDiameter: d.secondary.formDiameter + delta });
+    return f(v.inductance, v.selfCapacitance, base.toploadCapacitance, base.streamerCapacitance);
+  };
+  add('formDiameter', `Form diameter measured to ±${(tol * 1000).toFixed(1)} mm`, atForm(-tol), atForm(tol));
+
+  const down = Math.sqrt(contributions.reduce((a, c) => a + c.relLow * c.relLow, 0));
+  const up = Math.sqrt(contributions.reduce((a, c) => a + c.relHigh * c.relHigh, 0));
+  const low = nominal * (1 - down);
+  const high = nominal * (1 + up);
+
+  let tapTurns: UncertaintyResult['tapTurns'] = null;
+  const p = d.primary;
+  if (p && base.tankCapacitance !== null) {
+    const required = inductanceForResonance(nominal, base.tankCapacitance);
+    const dp = UNCERTAINTY_SOURCES.primaryInductance;
+    const more = Math.sqrt(((nominal / low) ** 2 - 1) ** 2 + dp * dp);
+    const less = Math.sqrt((1 - (nominal / high) ** 2) ** 2 + dp * dp);
+    const tapFor = (L: number) => solveTap((t) => primaryInductanceAtTap(p, t), L, minimumTap(p), p.turns, 1e-6).tapTurns;
+    tapTurns = { low: tapFor(required * (1 - less)), high: tapFor(required * (1 + more)) };
+  }
+
+  return {
+    loadedFrequency: { nominal, low, high, contributions },
+    tapTurns,
+    method:
+      'Each source is moved to the ends of its stated range on its own; the changes are combined by root-sum-square on each side. ' +
+      'The tap range adds the primary inductance model spread (±1.5 %) in quadrature.',
+  };
+}
+
+function pct(x: number): string {
+  return `${Number((x * 100).toFixed(1))} %`;
+}

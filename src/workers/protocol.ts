@@ -1,0 +1,80 @@
+import type { DesignIssue, DesignSI, Result, SweepSeriesName } from '../solver';
+
+/** A goal the builder fixes; the solver's inverse functions find the input that meets it. */
+export type Goal =
+  | { kind: 'frequency'; hz: number }
+  | { kind: 'tap'; turns: number }
+  | { kind: 'coupling'; k: number };
+
+export type GoalAnswer =
+  | { kind: 'frequency'; turns: number; windingLength: number }
+  | { kind: 'tap'; capacitance: number }
+  | { kind: 'coupling'; elevation: number };
+
+export interface SweepRequest {
+  path: string;
+  from: number;
+  to: number;
+  points: number;
+  series: SweepSeriesName[];
+}
+
+export interface SweepData {
+  path: string;
+  rows: Array<Record<string, number | null>>;
+  series: SweepSeriesName[];
+}
+
+export interface TuningCurve {
+  rows: Array<{ tap: number; primaryFrequency: number | null }>;
+  secondaryFrequency: number;
+  /** with the streamer allowance */
+  targetFrequency: number;
+  tapTurns: number | null;
+  tapLow: number | null;
+  tapHigh: number | null;
+}
+
+export interface CouplingCurve {
+  rows: Array<{ elevation: number; k: number | null }>;
+  elevation: number;
+  k: number;
+  targetK: number | null;
+}
+
+export interface ExchangeCurve {
+  rows: Array<{ t: number; primary: number; secondary: number }>;
+  firstPrimaryMinimum: number | null;
+  residualPrimaryEnergy: number | null;
+  k: number;
+}
+
+export type SolverRequest =
+  | { type: 'solve'; input: unknown }
+  | { type: 'sweep'; input: unknown; sweep: SweepRequest }
+  | { type: 'charts'; input: unknown }
+  | { type: 'goal'; input: unknown; goal: Goal };
+
+export interface Solved {
+  design: DesignSI;
+  result: Result;
+  ms: number;
+}
+
+export interface ChartsData {
+  tuning: TuningCurve | null;
+  coupling: CouplingCurve | null;
+  exchange: ExchangeCurve | null;
+}
+
+export type SolverReply =
+  | { type: 'solve'; data: Solved }
+  | { type: 'sweep'; data: SweepData }
+  | { type: 'charts'; data: ChartsData }
+  | { type: 'goal'; data: GoalAnswer | null };
+
+export type SolverMessage = { id: number; request: SolverRequest };
+
+export type SolverResponse =
+  | { id: number; ok: true; reply: SolverReply }
+  | { id: number; ok: false; issues: DesignIssue[]; message?: string };

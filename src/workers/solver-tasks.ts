@@ -1,0 +1,133 @@
+import { parseDesign } from '../lib/design';
+import {
+  energyExchange,
+  elevationForCoupling,
+  solve,
+  sweep,
+  tankCapacitanceForTap,
+  turnsForFrequency,
+  windingLength,
+  type DesignSI,
+  type Result,
+} from '../solver';
+import type {
+  ChartsData,
+  CouplingCurve,
+  ExchangeCurve,
+  Goal,
+  GoalAnswer,
+  SolverRequest,
+  SolverResponse,
+  SweepData,
+  SweepRequest,
+  TuningCurve,
+} from './protocol';
+
+const TUNING_POINTS = 60;
+const COUPLING_POINTS = 60;
+const EXCHANGE_POINTS = 300;
+
+/** Loaded frequency against primary tap: sweeping the primary's turn count from the inner end gives L at each tap. */
+export function tuningCurve(d: DesignSI, r: Result): TuningCurve | null {
+  if (!d.primary || !r.tank || !r.system || !r.tuning) return null;
+  const lo = Math.min(0.25, d.primary.turns);
+  const hi = d.primary.turns;
+  if (!(hi > lo)) return null;
+  const s = sweep(d, 'primary.turns', lo, hi, TUNING_POINTS, ['primaryInductance']);
+  const C = r.tank.capacitance;
+  const rows = s.values.map((tap, i) => {
+    const L = s.series.primaryInductance?.[i] ?? null;
+    return { tap, primaryFrequency: L === null ? null : 1 / (2 * Math.PI * Math.sqrt(L * C)) };
+  });
+  return {
+    rows,
+    secondaryFrequency: r.system.resonantFrequency,
+    targetFrequency: r.tuning.targetFrequency,
+    tapTurns: r.tuning.tapTurns,
+    tapLow: r.uncertainty?.tapTurns?.low ?? null,
+    tapHigh: r.uncertainty?.tapTurns?.high ?? null,
+  };
+}
+
+/** k (all primary turns) against the secondary's elevation, from level with the primary to well above it. */
+export function couplingCurve(d: DesignSI, r: Result): CouplingCurve | null {
+  if (!d.primary || !r.coupling) return null;
+  const len = windingLength(d.secondary);
+  const lo = Math.max(-d.groundClearance, Math.min(d.primary.elevation, d.secondary.elevation) - 0.05);
+  const hi = Math.max(lo + 0.1, d.secondary.elevation + Math.max(0.3, 0.6 * len));
+  const s = sweep(d, 'secondary.elevation', lo, hi, COUPLING_POINTS, ['k']);
+  return {
+    rows: s.values.map((elevation, i) => ({ elevation, k: s.series.k?.[i] ?? null })),
+    elevation: d.secondary.elevation,
+    k: r.coupling.k,
+    targetK: d.tuning.targetCoupling,
+  };
+}
+
+/** Energy in primary and secondary over time for the pair as tuned at the tap, as fractions of the start energy. */
+export function exchangeCurve(r: Result): ExchangeCurve | null {
+  const L1 = r.primary?.inductanceAtTap ?? null;
+  const k = r.coupling?.kAtTap ?? null;
+  if (L1 === null || k === null || !r.tank || !r.secondary || !r.system || !r.tuning || !(k > 0)) return null;
+  const pair = { L1, C1: r.tank.capacitance, L2: r.secondary.inductance, C2: r.system.totalCapacitance + r.tuning.streamerCapacitance, k };
+  const t1 = r.response?.transferTime ?? null;
+  // two transfers there and back; a very loose pair would need too many cycles to show
+  if (t1 === null || 2 * r.response!.f0 * t1 > 400) return null;
+  const e = energyExchange(pair, { duration: 2.2 * t1, points: EXCHANGE_POINTS, stepsPerCycle: 80 });
+  const rows = e.t.map((t, i) => ({ t, primary: e.primaryEnergy[i] / e.initialEnergy, secondary: e.secondaryEnergy[i] / e.initialEnergy }));
+  return { rows, firstPrimaryMinimum: e.firstPrimaryMinimum, residualPrimaryEnergy: e.residualPrimaryEnergy, k };
+}
+
+export function sweepData(d: DesignSI, req: SweepRequest): SweepData {
+  const s = sweep(d, req.path, req.from, req.to, req.points, req.series);
+  const rows = s.values.map((x, i) => {
+    const row: Record<string, number | null> = { x };
+    for (const name of req.series) row[name] = s.series[name]?.[i] ?? null;
+    return row;
+  });
+  return { path: req.path, rows, series: req.series };
+}
+
+export function goalAnswer(d: DesignSI, goal: Goal): GoalAnswer | null {
+  switch (goal.kind) {
+    case 'frequency': {
+      const r = turnsForFrequency(d, goal.hz);
+      return r ? { kind: 'frequency', turns: r.turns, windingLength: r.windingLength } : null;
+    }
+    case 'tap': {
+      const c = tankCapacitanceForTap(d, goal.turns);
+      return c === null || !Number.isFinite(c) ? null : { kind: 'tap', capacitance: c };
+    }
+    case 'coupling': {
+      const e = elevationForCoupling(d, goal.k);
+      return e === null ? null : { kind: 'coupling', elevation: e };
+    }
+  }
+}
+
+/** Runs one request; the same code answers in the worker and, for tests, on the main thread. */
+export function runRequest(id: number, request: SolverRequest, now: () => number = () => performance.now()): SolverResponse {
+  const t0 = now();
+  const parsed = parseDesign(request.input);
+  if (!parsed.ok) return { id, ok: false, issues: parsed.issues };
+  const d = parsed.design;
+  try {
+    switch (request.type) {
+      case 'solve': {
+        const result = solve(d);
+        return { id, ok: true, reply: { type: 'solve', data: { design: d, result, ms: now() - t0 } } };
+      }
+      case 'sweep':
+        return { id, ok: true, reply: { type: 'sweep', data: sweepData(d, request.sweep) } };
+      case 'charts': {
+        const result = solve(d);
+        const data: ChartsData = { tuning: tuningCurve(d, result), coupling: couplingCurve(d, result), exchange: exchangeCurve(result) };
+        return { id, ok: true, reply: { type: 'charts', data } };
+      }
+      case 'goal':
+        return { id, ok: true, reply: { type: 'goal', data: goalAnswer(d, request.goal) } };
+    }
+  } catch (e) {
+    return { id, ok: false, issues: [], message: e instanceof Error ? e.message : 'The computation failed for this design.' };
+  }
+}

@@ -1,0 +1,80 @@
+import { spawn, type ChildProcess } from 'node:child_process';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { createServer } from 'node:net';
+import { tmpdir } from 'node:os';
+import { join, resolve } from 'node:path';
+
+export type TestServer = { url: string; dataDir: string; stop: () => Promise<void>; output: () => string };
+
+export async function freePort(): Promise<number> {
+  return new Promise((ok, fail) => {
+    const s = createServer();
+    s.once('error', fail);
+    s.listen(0, '127.0.0.1', () => {
+      const a = s.address();
+      const port = typeof a === 'object' && a ? a.port : 0;
+      s.close(() => ok(port));
+    });
+  });
+}
+
+/** Starts the built app through the real start script, on a free port with a fresh file database. */
+export async function startServer(extraEnv: Record<string, string> = {}): Promise<TestServer> {
+  const root = resolve(import.meta.dirname, '../..');
+  const dataDir = mkdtempSync(join(tmpdir(), 'coilwright-test-'));
+  const port = await freePort();
+  const url = `http://127.0.0.1:${port}`;
+  let log = '';
+  const child: ChildProcess = spawn(process.execPath, [join(root, 'node_modules/tsx/dist/cli.mjs'), join(root, 'scripts/start.ts')], {
+    cwd: root,
+    env: {
+      ...process.env,
+      NODE_ENV: 'production',
+      HOST: '127.0.0.1',
+      PORT: String(port),
+      DATABASE_URL: `file:${join(dataDir, 'test.db')}`,
+      DATA_DIR: dataDir,
+      COILWRIGHT_SKIP_BUILD: '1',
+      COILWRIGHT_AUTH_RATE_LIMIT: '1000',
+      SMTP_URL: '',
+      S3_ENDPOINT: '',
+      BETTER_AUTH_URL: '',
+      BETTER_AUTH_SECRET: '',
+      ...extraEnv,
+    },
+    stdio: ['ignore', 'pipe', 'pipe'],
+    detached: true,
+  });
+  child.stdout!.on('data', (d) => (log += d));
+  child.stderr!.on('data', (d) => (log += d));
+  const deadline = Date.now() + 60_000;
+  for (;;) {
+    if (child.exitCode !== null) throw new Error(`server exited early:\n${log}`);
+    try {
+      const r = await fetch(`${url}/`);
+      if (r.status < 500) break;
+    } catch {
+      /* not listening yet */
+    }
+    if (Date.now() > deadline) throw new Error(`server did not start in 60 s:\n${log}`);
+    await new Promise((r) => setTimeout(r, 200));
+  }
+  return {
+    url,
+    dataDir,
+    output: () => log,
+    stop: async () => {
+      if (child.exitCode === null) {
+        const exited = new Promise((r) => child.once('exit', r));
+        try {
+          process.kill(-child.pid!, 'SIGTERM');
+        } catch {
+          /* already gone */
+        }
+        await Promise.race([exited, new Promise((r) => setTimeout(r, 5000))]);
+        if (child.exitCode === null) process.kill(-child.pid!, 'SIGKILL');
+      }
+      rmSync(dataDir, { recursive: true, force: true });
+    },
+  };
+}
