@@ -33,6 +33,10 @@ export const errorMessages = {
   conflict: 'Someone saved a newer version in the meantime. Reload to see it, then make your change again.',
   payload_too_large: 'That is too large to upload.',
   too_many_requests: 'Too many attempts; wait a minute and try again.',
+  rate_limited: 'Too many requests; wait a minute and try again.',
+  invalid_json: 'The request body is not valid JSON.',
+  unsupported_media_type: 'This kind of file is not accepted here.',
+  internal_error: 'Something went wrong on our side; nothing was changed.',
   // the connection itself
   network_error: 'Could not reach Coilwright. Check the connection and try again.',
   unknown: 'Something went wrong. Try again; if it keeps happening, tell the site administrator.',

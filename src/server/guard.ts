@@ -1,11 +1,7 @@
 import type { AstroGlobal } from 'astro';
 import type { SessionUser } from './session';
 
-/** Only same-site relative paths may be a return address. */
-export function safeNext(next: string | null | undefined, fallback = '/designs'): string {
-  if (!next || !next.startsWith('/') || next.startsWith('//') || next.startsWith('/\\')) return fallback;
-  return next;
-}
+export { safeNext } from '../lib/safe-next';
 
 export function requirePageUser(Astro: AstroGlobal): SessionUser | Response {
   const user = Astro.locals.user;

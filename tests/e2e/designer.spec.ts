@@ -56,7 +56,7 @@ test('sweep: a chart with one point per step, and its CSV', async ({ page }) => 
   await page.getByLabel('Input to vary').selectOption('secondary.turns');
   await page.getByLabel('From', { exact: true }).fill('600');
   await page.getByLabel('To', { exact: true }).fill('1400');
-  await page.getByLabel('Points').fill('21');
+  await page.getByLabel('Number of points').fill('21');
   await page.getByRole('button', { name: 'Run sweep' }).click();
   const chart = page.getByTestId('sweep-resonantFrequency');
   await expect(chart.locator('.recharts-line-curve')).toHaveCount(1);

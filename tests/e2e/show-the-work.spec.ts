@@ -31,7 +31,8 @@ test('GET /validation shows every check passing and links each row to its method
   const href = await rows.first().locator('a[href^="/methods#"]').first().getAttribute('href');
   expect(href).toMatch(/^\/methods#[a-z-]+$/);
   await page.goto(href!);
-  await expect(page.locator(href!.slice('/methods'.length))).toBeVisible();
+  await expect(page.locator(href!.slice('/methods'.length))).toBeAttached();
+  await expect(page.getByRole('heading', { level: 1 })).toHaveText('Methods');
 });
 
 test('GET /safety has an anchor for each hazard', async ({ page }) => {
@@ -39,5 +40,5 @@ test('GET /safety has an anchor for each hazard', async ({ page }) => {
   for (const id of ['stored-energy', 'supply', 'rf-burns', 'ozone', 'uv', 'fire', 'noise', 'implants', 'interference', 'audience']) {
     await expect(page.locator(`section#${id} h2`)).toBeVisible();
   }
-  await expect(page.getByText('Coilwright gives estimates, not safety certification.')).toBeVisible();
+  await expect(page.getByRole('main').getByText('Coilwright gives estimates, not safety certification.')).toBeVisible();
 });

@@ -1,5 +1,5 @@
-import { describe, expect, it } from 'vitest';
-import { spawnSync } from 'node:child_process';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { spawn } from 'node:child_process';
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -9,9 +9,23 @@ import { solve } from '../../src/solver';
 const root = join(__dirname, '..', '..');
 const dir = mkdtempSync(join(tmpdir(), 'coilwright-cli-'));
 
-function run(args: string[], stdin?: string) {
-  const r = spawnSync('npx', ['tsx', 'scripts/solve.ts', ...args], { cwd: root, input: stdin, encoding: 'utf8', timeout: 60000 });
-  return { code: r.status, stdout: r.stdout, stderr: r.stderr };
+interface Run {
+  code: number | null;
+  stdout: string;
+  stderr: string;
+}
+
+function run(args: string[], stdin?: string): Promise<Run> {
+  return new Promise((resolve, reject) => {
+    const child = spawn('npx', ['tsx', 'scripts/solve.ts', ...args], { cwd: root });
+    let stdout = '';
+    let stderr = '';
+    child.stdout.on('data', (b: Buffer) => (stdout += b.toString()));
+    child.stderr.on('data', (b: Buffer) => (stderr += b.toString()));
+    child.on('error', reject);
+    child.on('close', (code) => resolve({ code, stdout, stderr }));
+    child.stdin.end(stdin ?? '');
+  });
 }
 
 const design = exampleDesigns.find((e) => e.id === 'sign-transformer-toroid')!.design;
@@ -21,25 +35,36 @@ const expected = (() => {
   return solve(p.design);
 })();
 
-// each case starts a fresh tsx process, which takes seconds on a loaded machine
-describe('scripts/solve.ts (npm run -s solve)', { timeout: 90000 }, () => {
+// every case is its own tsx process; they start together because each takes seconds to boot
+const runs: Record<string, Run> = {};
+beforeAll(async () => {
+  const file = join(dir, 'design.json');
+  writeFileSync(file, JSON.stringify(design));
+  const bad = { ...design, secondary: { ...design.secondary, formDiameter: '3 kg', turn: 5 } };
+  const cases: Record<string, Promise<Run>> = {
+    file: run([file]),
+    stdin: run(['-'], JSON.stringify(design)),
+    invalid: run(['-'], JSON.stringify(bad)),
+    notJson: run(['-'], '{ secondary: '),
+    missing: run([join(dir, 'nope.json')]),
+    usage: run([]),
+  };
+  for (const [k, p] of Object.entries(cases)) runs[k] = await p;
+}, 240000);
+
+describe('scripts/solve.ts (npm run -s solve)', () => {
   it('prints the result JSON, and only that, for a file', () => {
-    const file = join(dir, 'design.json');
-    writeFileSync(file, JSON.stringify(design));
-    const r = run([file]);
-    expect(r.code).toBe(0);
-    expect(JSON.parse(r.stdout)).toEqual(expected);
+    expect(runs.file.code).toBe(0);
+    expect(JSON.parse(runs.file.stdout)).toEqual(expected);
   });
 
   it('reads the design from stdin with "-"', () => {
-    const r = run(['-'], JSON.stringify(design));
-    expect(r.code).toBe(0);
-    expect(JSON.parse(r.stdout).tuning.tapTurns).toBe(expected.tuning!.tapTurns);
+    expect(runs.stdin.code).toBe(0);
+    expect(JSON.parse(runs.stdin.stdout)).toEqual(expected);
   });
 
   it('exits 1 with "path: message" lines on stderr for an invalid design, nothing on stdout', () => {
-    const bad = { ...design, secondary: { ...design.secondary, formDiameter: '3 kg', turn: 5 } };
-    const r = run(['-'], JSON.stringify(bad));
+    const r = runs.invalid;
     expect(r.code).toBe(1);
     expect(r.stdout).toBe('');
     expect(r.stderr).toContain('secondary.formDiameter: expected a length such as "4 in" or "0.1 m", got a mass');
@@ -48,20 +73,17 @@ describe('scripts/solve.ts (npm run -s solve)', { timeout: 90000 }, () => {
   });
 
   it('exits 1 with a clear message for text that is not JSON', () => {
-    const r = run(['-'], '{ secondary: ');
-    expect(r.code).toBe(1);
-    expect(r.stderr).toMatch(/not valid JSON/);
+    expect(runs.notJson.code).toBe(1);
+    expect(runs.notJson.stderr).toMatch(/not valid JSON/);
   });
 
   it('exits 1 with a clear message for a missing file', () => {
-    const r = run([join(dir, 'nope.json')]);
-    expect(r.code).toBe(1);
-    expect(r.stderr).toMatch(/no such file/);
+    expect(runs.missing.code).toBe(1);
+    expect(runs.missing.stderr).toMatch(/no such file/);
   });
 
   it('prints its usage without an argument', () => {
-    const r = run([]);
-    expect(r.code).toBe(1);
-    expect(r.stderr).toMatch(/usage/);
+    expect(runs.usage.code).toBe(1);
+    expect(runs.usage.stderr).toMatch(/usage/);
   });
 });

@@ -33,6 +33,7 @@ export interface Hazard {
 /** The community's reference sheet, cited by name throughout. */
 export const SAFETY_SHEET =
   'the community safety sheet (Tesla Coil Mailing List, "Tesla Coils Safety Information", v1.1, 1996)';
+const SHEET = 'community safety sheet (TCML, v1.1, 1996)';
 const LIST = 'Tesla Coil Mailing List archive';
 const WARNING_PAGE = 'a community safety warning page (hotstreamer.deanostoybox.com)';
 const TROUPE = 'a professional performing troupe (Make: magazine, "High voltage: put safety first during your Tesla coil performance")';
@@ -45,9 +46,9 @@ export const hazards: Hazard[] = [
       'The supply and the tank circuit can kill. A neon-sign or other high-voltage transformer delivers thousands of volts and may ' +
       'give no sign of being on except a quiet hum. The rectified mains bus of a solid-state driver can kill as well.',
     precautions: [
-      { text: 'Never adjust anything with the power on, however small the change.', source: `${LIST}, 2000; ${SAFETY_SHEET}` },
+      { text: 'Never adjust anything with the power on, however small the change.', source: `${LIST}, 2000; ${SHEET}` },
       { text: 'Unplug the supply physically rather than trusting a switch or a relay.', source: `${LIST}, 2000` },
-      { text: 'Use a key switch and proper fusing; ground every metal case.', source: `${LIST}, 2000; ${SAFETY_SHEET}` },
+      { text: 'Use a key switch and proper fusing; ground every metal case.', source: `${LIST}, 2000; ${SHEET}` },
       { text: 'Never work alone, and have someone present who knows how to cut the power.', source: `${LIST}, 2000` },
       {
         text:
@@ -83,7 +84,7 @@ export const hazards: Hazard[] = [
       'about 700 Hz. Such burns heal slowly. The belief that skin effect protects you is false comfort.',
     precautions: [
       { text: 'Never touch the secondary, the topload or an arc while the coil can run.', source: WARNING_PAGE },
-      { text: 'Do not copy photographs of people under sparks: they are faked or staged under special conditions.', source: 'genapro.com, Tesla coil page' },
+      { text: 'Do not imitate photographs of people touching or standing under sparks: they are faked or staged under special conditions.', source: 'genapro.com, Tesla coil page' },
       { text: 'Keep the strike rail and secondary base bonded to a dedicated RF ground.', source: `${LIST}, 1999` },
     ],
   },
@@ -107,7 +108,7 @@ export const hazards: Hazard[] = [
       'such as bulbs or tubes, can produce X-rays.',
     precautions: [
       { text: 'Enclose the spark gap and do not look at it while it fires.', source: `${WARNING_PAGE}; Johnson, "Tesla coil impedance"` },
-      { text: 'Do not strike arcs onto vacuum tubes or bulbs.', source: `${SAFETY_SHEET}, §5` },
+      { text: 'Do not strike arcs onto vacuum tubes or bulbs.', source: `${SHEET}, §5` },
     ],
   },
   {
@@ -167,7 +168,7 @@ export const hazards: Hazard[] = [
       },
       { text: 'Use a dead-man push button with lockout, and consider a cage sized to the coil.', source: `${LIST}, 2012` },
       { text: 'No entry to a builder’s area without permission; touch nothing; supervise children.', source: 'Teslathon visitor rules, Museum of Technology, 2016' },
-      { text: 'Never run with children or pets near the coil; recommend experienced supervision for young builders.', source: SAFETY_SHEET },
+      { text: 'Never run with children or pets near the coil; recommend experienced supervision for young builders.', source: SHEET },
     ],
   },
 ];

@@ -8,7 +8,7 @@ import { TextField } from '~/components/ui/TextField';
 import { FormMessage } from '~/components/ui/FormMessage';
 import { SubmitButton } from '~/components/ui/SubmitButton';
 import { signUpSchema } from './schemas';
-import { safeNext } from './safe-next';
+import { safeNext } from '../../lib/safe-next';
 
 type Props = { next: string };
 type Values = z.input<typeof signUpSchema>;

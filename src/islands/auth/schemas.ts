@@ -4,6 +4,7 @@ export const emailField = z.string().trim().min(1, 'Enter your e-mail address.')
 
 export const newPasswordField = z
   .string()
+  .min(1, 'Enter a password.')
   .min(8, 'The password must be at least 8 characters.')
   .max(128, 'The password can be at most 128 characters.');
 

@@ -1,6 +1,7 @@
-import { useMemo, useState } from 'react';
-import { parseDesign, type DesignInput } from '~/lib/design';
-import type { Result } from '~/solver';
+import { useEffect, useMemo, useState } from 'react';
+import type { DesignInput } from '~/lib/design';
+import type { DesignIssue, DesignSI, Result } from '~/solver';
+import { solverClient } from './solver-client';
 import type { UnitSystem } from '~/lib/format';
 import { CoilDrawing } from '../drawing/CoilDrawing';
 import { ResultsPanel } from './results/ResultsPanel';
@@ -17,13 +18,34 @@ export type DesignViewerProps = {
 /** A saved design, read-only: drawing, results and charts, no inputs. For share links and build sheets. */
 export default function DesignViewer({ name, design, result, unitSystem = 'metric' }: DesignViewerProps) {
   const [system, setSystem] = useState<UnitSystem>(unitSystem);
-  const parsed = useMemo(() => parseDesign(design), [design]);
   const inputKey = useMemo(() => JSON.stringify(design), [design]);
-  if (!parsed.ok || !result) {
+  // the worker resolves the stored input into SI for the drawing and the charts
+  const [parsed, setParsed] = useState<{ ok: true; design: DesignSI } | { ok: false; issues: DesignIssue[] } | null>(null);
+  useEffect(() => {
+    let live = true;
+    void solverClient()
+      .request({ type: 'solve', input: design })
+      .then((r) => {
+        if (!live) return;
+        if (r.ok && r.reply.type === 'solve') setParsed({ ok: true, design: r.reply.data.design });
+        else if (!r.ok) setParsed({ ok: false, issues: r.issues });
+      });
+    return () => {
+      live = false;
+    };
+  }, [inputKey]);
+  if (!result || (parsed && !parsed.ok)) {
     return (
       <p className="cw-alert" role="status">
-        “{name}” can no longer be computed: {parsed.ok ? 'the solver gave no result' : parsed.issues.map((i) => `${i.path}: ${i.message}`).join('; ')}.
+        “{name}” can no longer be computed: {parsed && !parsed.ok ? parsed.issues.map((i) => `${i.path}: ${i.message}`).join('; ') : 'the solver gave no result'}.
       </p>
+    );
+  }
+  if (!parsed) {
+    return (
+      <div className="space-y-6" data-testid="design-viewer">
+        <ResultsPanel result={result} system={system} />
+      </div>
     );
   }
   return (

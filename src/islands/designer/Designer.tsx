@@ -1,8 +1,7 @@
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { FormProvider, useForm, useWatch, type FieldErrors, type Resolver } from 'react-hook-form';
-import { zodResolver } from '@hookform/resolvers/zod';
 import { QueryClient, QueryClientProvider, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import { designInputSchema, type DesignInput } from '~/lib/design';
+import type { DesignInput } from '~/lib/design';
 import { formatQuantity, lengthInputText, type UnitSystem } from '~/lib/format';
 import type { SolverWarning } from '~/solver';
 import { createDesign } from '~/lib/api/create-design';
@@ -35,11 +34,20 @@ export type DesignerProps = {
   signInHref?: string;
 };
 
-const schemaResolver = zodResolver(designInputSchema);
+// The schema and its unit parser load on the first check (the first save), not with the page: the
+// live results already come from the same schema in the worker.
+let schemaResolver: Promise<Resolver<FormValues>> | null = null;
+function loadSchemaResolver(): Promise<Resolver<FormValues>> {
+  schemaResolver ??= Promise.all([import('@hookform/resolvers/zod'), import('~/lib/design/schema')]).then(
+    ([{ zodResolver }, { designInputSchema }]) => zodResolver(designInputSchema) as unknown as Resolver<FormValues>,
+  );
+  return schemaResolver;
+}
 
 // The schema the API uses checks the design; the form adds only the name.
 const resolver: Resolver<FormValues> = async (values, context, options) => {
-  const r = await (schemaResolver as unknown as Resolver<FormValues>)(toDesignInput(values) as unknown as FormValues, context, options);
+  const schema = await loadSchemaResolver();
+  const r = await schema(toDesignInput(values) as unknown as FormValues, context, options);
   const errors: FieldErrors<FormValues> = { ...r.errors };
   const name = values.name.trim();
   if (!name) errors.name = { type: 'required', message: 'Give the design a name.' };
@@ -365,9 +373,6 @@ function DesignerInner({ signedIn, unitSystem, record, start, signInHref = '/sig
                 <TankPart />
                 <SupplyPart />
                 <TuningPart system={system} />
-                <div className="flex flex-wrap items-center gap-3">
-                  <SaveBar signedIn={signedIn} editing={editing} readOnly={readOnly} saving={saving} dirty={dirty} revision={null} signInHref={signInHref} compact />
-                </div>
               </form>
               <GoalPanel input={input} system={system} hasPrimary={values.primary.enabled} hasTank={values.tank.mode !== 'none'} readOnly={readOnly} apply={applyGoal} />
             </div>
@@ -416,8 +421,8 @@ function DesignerInner({ signedIn, unitSystem, record, start, signInHref = '/sig
   );
 }
 
-function SaveBar(props: { signedIn: boolean; editing: boolean; readOnly: boolean; saving: boolean; dirty: boolean; revision: number | null; signInHref: string; compact?: boolean }) {
-  const { signedIn, editing, readOnly, saving, dirty, revision, signInHref, compact } = props;
+function SaveBar(props: { signedIn: boolean; editing: boolean; readOnly: boolean; saving: boolean; dirty: boolean; revision: number | null; signInHref: string }) {
+  const { signedIn, editing, readOnly, saving, dirty, revision, signInHref } = props;
   if (readOnly) return <p className="text-sm text-ink-soft">You can view this design; ask its owner for edit access to change it.</p>;
   if (!signedIn) {
     return (
@@ -431,12 +436,10 @@ function SaveBar(props: { signedIn: boolean; editing: boolean; readOnly: boolean
       <button type="submit" className="cw-btn cw-btn-primary" disabled={saving} aria-busy={saving}>
         {saving ? 'Saving…' : editing ? 'Save' : 'Save design'}
       </button>
-      {!compact && (
-        <span className="text-sm text-ink-soft" data-testid="save-state">
-          {dirty ? 'Unsaved changes' : editing ? `All changes saved${revision ? ` (revision ${revision})` : ''}` : 'Not saved yet'}
-          <span className="sr-only">. Ctrl+S or Cmd+S also saves.</span>
-        </span>
-      )}
+      <span className="text-sm text-ink-soft" data-testid="save-state">
+        {dirty ? 'Unsaved changes' : editing ? `All changes saved${revision ? ` (revision ${revision})` : ''}` : 'Not saved yet'}
+        <span className="sr-only">. Ctrl+S or Cmd+S also saves.</span>
+      </span>
     </div>
   );
 }

@@ -1,5 +1,4 @@
 import { useId, useState, type FormEvent } from 'react';
-import { parseQuantity } from '~/lib/design';
 import { formatFixed, formatQuantity, lengthInputText, type UnitSystem } from '~/lib/format';
 import type { Goal, GoalAnswer } from '../../workers/protocol';
 import { solverClient } from './solver-client';
@@ -41,8 +40,10 @@ export function GoalPanel({ input, system, hasPrimary, hasTank, readOnly, apply 
     }
   }
 
-  function onFrequency(e: FormEvent) {
+  async function onFrequency(e: FormEvent) {
     e.preventDefault();
+    // the unit parser is loaded when first needed, not with the page
+    const { parseQuantity } = await import('~/lib/design/units');
     const p = parseQuantity(freq, 'frequency');
     if (!p.ok || !(p.value > 0)) return setStatus((s) => ({ ...s, frequency: { tone: 'fault', text: `Target frequency: ${p.ok ? 'must be above 0' : p.message}` } }));
     void run(

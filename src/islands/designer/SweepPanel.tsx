@@ -1,5 +1,4 @@
 import { lazy, Suspense, useId, useMemo, useState, type FormEvent } from 'react';
-import { parseQuantity } from '~/lib/design';
 import { sweepablePaths, type DesignSI } from '~/solver';
 import { formatSignificant, lengthInputText, formatQuantity, type UnitSystem } from '~/lib/format';
 import type { SweepData } from '../../workers/protocol';
@@ -16,11 +15,13 @@ function rangeText(v: number, s: SweepInput, system: UnitSystem): string {
   return formatSignificant(v, 4);
 }
 
-function readRange(text: string, s: SweepInput): { ok: true; value: number } | { ok: false; message: string } {
+async function readRange(text: string, s: SweepInput): Promise<{ ok: true; value: number } | { ok: false; message: string }> {
   if (s.quantity === null) {
     const n = Number(text.trim().replace(',', '.'));
     return Number.isFinite(n) && text.trim() !== '' ? { ok: true, value: n } : { ok: false, message: 'expected a number' };
   }
+  // the unit parser is loaded when first needed, not with the page
+  const { parseQuantity } = await import('~/lib/design/units');
   return parseQuantity(text, s.quantity);
 }
 
@@ -55,8 +56,8 @@ export function SweepPanel({ design, input, system }: Props) {
   async function onSubmit(e: FormEvent) {
     e.preventDefault();
     if (!spec) return;
-    const a = readRange(from, spec);
-    const b = readRange(to, spec);
+    const a = await readRange(from, spec);
+    const b = await readRange(to, spec);
     const n = Number(points);
     if (!a.ok) return setError(`From: ${a.message}`);
     if (!b.ok) return setError(`To: ${b.message}`);
@@ -122,9 +123,9 @@ export function SweepPanel({ design, input, system }: Props) {
               ))}
             </div>
           </fieldset>
-          <div className="w-24">
+          <div className="w-36">
             <label htmlFor={ids.points} className="cw-label text-sm">
-              Points
+              Number of points
             </label>
             <input id={ids.points} className="cw-input" value={points} onChange={(e) => setPoints(e.target.value)} inputMode="numeric" autoComplete="off" />
           </div>

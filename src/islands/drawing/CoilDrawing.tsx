@@ -1,5 +1,5 @@
-import { useId, useMemo } from 'react';
-import { parseDesign, type DesignInput } from '~/lib/design';
+import { useEffect, useId, useState } from 'react';
+import type { DesignInput } from '~/lib/design';
 import type { DesignSI, Result } from '~/solver';
 import { formatLength, type UnitSystem } from '~/lib/format';
 import { coilSection } from './geometry';
@@ -27,11 +27,21 @@ const MM = 1000; // drawing units: millimetres, so stroke widths and fonts stay 
  */
 export function CoilDrawing({ design, result, system = 'metric', className }: Props) {
   const titleId = useId();
-  const si = useMemo<DesignSI | null>(() => {
-    if (isDesignSI(design)) return design;
-    const p = parseDesign(design);
-    return p.ok ? p.design : null;
-  }, [design]);
+  const given = isDesignSI(design) ? design : null;
+  const [parsed, setParsed] = useState<DesignSI | null>(null);
+  useEffect(() => {
+    if (given) return;
+    let live = true;
+    // a stored design is resolved with the schema's unit parser, loaded only for this case
+    void import('~/lib/design/parse').then(({ parseDesign }) => {
+      const p = parseDesign(design);
+      if (live) setParsed(p.ok ? p.design : null);
+    });
+    return () => {
+      live = false;
+    };
+  }, [design, given]);
+  const si = given ?? parsed;
   if (!si) return <p className="text-sm text-ink-soft">The drawing appears once the design is complete and valid.</p>;
 
   const g = coilSection(si);

@@ -16,6 +16,17 @@ export function sig(x: number, digits = 4): string {
   return x.toFixed(Math.min(d, 9));
 }
 
+/** Like sig, without trailing zeros: 16 not 16.00, 40.5 not 40.50. */
+export function plain(x: number, digits = 4): string {
+  const s = sig(x, digits);
+  return s.includes('.') ? s.replace(/\.?0+$/, '') : s;
+}
+
+/** Wire diameters and pitches, where a tenth of a millimetre is too coarse. */
+export function lengthFine(m: number): string {
+  return `${fixed(m * 1000, 3)} mm (${fixed(m / IN, 4)} in)`;
+}
+
 /** Short lengths (form, winding, heights) in mm and inches. */
 export function lengthShort(m: number): string {
   return `${fixed(m * 1000, 1)} mm (${fixed(m / IN, 2)} in)`;

@@ -31,7 +31,7 @@ const INSULATION: Record<string, string> = { bare: 'bare', single: 'single build
 export function sheetSections(sheet: BuildSheet): SheetSection[] {
   const s = sheet.secondary;
   const o = sheet.options;
-  const wire = s.awg !== null ? `${s.awg} AWG, ${INSULATION[s.insulation ?? 'bare']} enamel` : `${fmt.lengthShort(s.wireDiameter)} bare`;
+  const wire = s.awg !== null ? `${s.awg} AWG, ${INSULATION[s.insulation ?? 'bare']} enamel` : `${fmt.lengthFine(s.wireDiameter)} bare`;
   const out: SheetSection[] = [
     {
       id: 'secondary',
@@ -41,8 +41,8 @@ export function sheetSections(sheet: BuildSheet): SheetSection[] {
         { label: 'Form length to cut', value: fmt.lengthShort(s.formLength), note: `winding + ${fmt.lengthShort(o.endMargin)} bare form at each end (at least 1 in; Quick cuts about 3 in over the winding, TRADE §2.14)` },
         { label: 'Winding length', value: fmt.lengthShort(s.windingLength) },
         { label: 'Turns', value: String(s.turns) },
-        { label: 'Wire', value: wire, note: `${fmt.lengthShort(s.insulatedDiameter)} over the enamel` },
-        { label: 'Turns per length', value: `${fmt.sig(s.turnsPerMetre / 100, 4)} per cm (${fmt.sig(s.turnsPerMetre * 0.0254, 4)} per in)`, note: `pitch ${fmt.lengthShort(s.pitch)}` },
+        { label: 'Wire', value: wire, note: `${fmt.lengthFine(s.insulatedDiameter)} over the enamel` },
+        { label: 'Turns per length', value: `${fmt.sig(s.turnsPerMetre / 100, 4)} per cm (${fmt.sig(s.turnsPerMetre * 0.0254, 4)} per in)`, note: `pitch ${fmt.lengthFine(s.pitch)}` },
         { label: 'Wire length (computed)', value: fmt.lengthLong(s.wireLength) },
         { label: 'Wire to buy', value: fmt.lengthLong(s.wireToBuy), note: `with ${fmt.percent(o.margin, 0)} extra for leads and mistakes` },
         { label: 'Copper mass (computed)', value: fmt.mass(s.wireMass) },
@@ -52,7 +52,7 @@ export function sheetSections(sheet: BuildSheet): SheetSection[] {
           value: `${s.spoolMetric.count} × ${s.spoolMetric.size} kg or ${s.spoolImperial.count} × ${s.spoolImperial.size} lb`,
           note: 'common spool sizes (common practice); one continuous length avoids a splice',
         },
-        { label: 'Winding time', value: fmt.duration(s.windingTime), note: `${s.turns} turns at ${fmt.sig(o.rpm, 4)} rpm, without set-up or stops` },
+        { label: 'Winding time', value: fmt.duration(s.windingTime), note: `${s.turns} turns at ${fmt.plain(o.rpm, 4)} rpm, without set-up or stops` },
         { label: 'DC resistance', value: fmt.resistance(s.dcResistance), note: 'check with an ohmmeter after winding' },
       ],
       notes: WINDING_NOTES,
@@ -72,7 +72,7 @@ export function sheetSections(sheet: BuildSheet): SheetSection[] {
   const p = sheet.primary;
   if (p) {
     const rows: SheetRow[] = [
-      { label: 'Shape', value: `${p.shape}, ${fmt.sig(p.turns, 4)} turns of ${fmt.lengthShort(p.conductorDiameter)} conductor` },
+      { label: 'Shape', value: `${p.shape}, ${fmt.plain(p.turns, 4)} turns of ${fmt.lengthShort(p.conductorDiameter)} conductor` },
       { label: 'Conductor length (all turns)', value: fmt.lengthLong(p.conductorLength) },
       { label: 'Conductor to buy', value: fmt.lengthLong(p.conductorToBuy), note: `with ${fmt.percent(o.margin, 0)} extra; add the leads to the tank and gap` },
     ];

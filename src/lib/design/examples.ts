@@ -38,7 +38,7 @@ export const exampleDesigns: readonly ExampleDesign[] = [
       primary: { shape: 'flat', innerDiameter: '6.5 in', turns: 16, conductorDiameter: '0.25 in', spacing: '0.25 in' },
       tank: { unitCapacitance: '100 nF', unitVoltage: '2 kV', series: 20, parallel: 2 },
       supply: { kind: 'transformer', voltage: '12 kV', current: '30 mA', lineFrequency: '60 Hz', breakRate: '120 Hz' },
-      tuning: { streamerCapacitance: '3 pF', targetCoupling: 0.15 },
+      tuning: { streamerCapacitance: '3 pF', targetCoupling: 0.1 },
     },
   },
   {

@@ -16,16 +16,15 @@ const LENGTH_UNITS: Record<string, { metres: number; system: UnitSystem }> = {
 };
 
 const NUMBER = String.raw`[-+]?(?:\d+(?:[.,]\d*)?|[.,]\d+)(?:e[-+]?\d+)?`;
-const PATTERN = new RegExp(String.raw`^\s*(${NUMBER})(?:\s*/\s*(\d+(?:\.\d*)?))?\s*([a-z]+)\s*$`, 'i');
+const PATTERN = new RegExp(String.raw`^\s*(${NUMBER})\s*([a-z]+)\s*$`, 'i');
 
-/** Reads "4.5 in", "114 mm", "1/4 in" or "0,6 m" into metres; null for anything else. */
+/** Reads "4.5 in", "114 mm" or "0,6 m" into metres; null for anything else. */
 export function readLength(text: string): { metres: number; system: UnitSystem } | null {
   const m = PATTERN.exec(text);
   if (!m) return null;
-  const unit = LENGTH_UNITS[m[3].toLowerCase()];
+  const unit = LENGTH_UNITS[m[2].toLowerCase()];
   if (!unit) return null;
-  let value = Number(m[1].replace(',', '.'));
-  if (m[2] !== undefined) value /= Number(m[2]);
+  const value = Number(m[1].replace(',', '.'));
   if (!Number.isFinite(value)) return null;
   return { metres: value * unit.metres, system: unit.system };
 }

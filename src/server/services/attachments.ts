@@ -212,3 +212,19 @@ export async function deleteAttachmentsOf(db: Db, designId: string): Promise<voi
   for (let i = 0; i < keys.length; i += 1000) await deleteObjects(keys.slice(i, i + 1000));
   await db.delete(attachments).where(eq(attachments.designId, designId));
 }
+
+/** The HTTP answer for a stored file: never sniffed by the browser, images inline, instrument files as downloads. */
+export function fileResponse(file: Awaited<ReturnType<typeof readAttachment>>, which: 'file' | 'thumbnail'): Response {
+  const inline = which === 'thumbnail' || file.row.kind === 'photo';
+  const name = which === 'thumbnail' ? 'thumbnail.webp' : file.row.fileName;
+  return new Response(new Uint8Array(file.body), {
+    status: 200,
+    headers: {
+      'content-type': file.contentType,
+      'content-length': String(file.body.length),
+      'content-disposition': `${inline ? 'inline' : 'attachment'}; filename="${name.replace(/"/g, '')}"`,
+      'x-content-type-options': 'nosniff',
+      'cache-control': 'private, max-age=300',
+    },
+  });
+}

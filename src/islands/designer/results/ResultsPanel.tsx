@@ -17,6 +17,7 @@ export function ResultsPanel({ result: r, system, stale }: Props) {
 
       {r.secondary && (
         <Group title="Secondary" id="res-secondary">
+          <dl>
           <Row id="secondary.inductance" label="Inductance" value={q(r.secondary.inductance, 'inductance')} />
           <Row id="secondary.selfCapacitance" label="Self-capacitance (Medhurst)" value={q(r.secondary.selfCapacitance, 'capacitance')} />
           <Row id="secondary.resonantFrequency" label="Resonance without topload" value={q(r.secondary.resonantFrequency, 'frequency')} />
@@ -27,11 +28,13 @@ export function ResultsPanel({ result: r, system, stale }: Props) {
           <Row id="secondary.dcResistance" label="DC resistance (20 °C)" value={q(r.secondary.dcResistance, 'resistance')} />
           <Row id="secondary.wireMass" label="Copper mass" value={q(r.secondary.wireMass, 'mass', o)} />
           {r.secondary.q !== null && <Row id="secondary.q" label="Q at the loaded frequency (upper bound)" value={formatFixed(r.secondary.q, 0)} />}
+          </dl>
         </Group>
       )}
 
       {r.system && (
         <Group title="Topload and system frequency" id="res-system">
+          <dl>
           {r.topload && <Row id="topload.capacitance" label="Topload capacitance" value={q(r.topload.capacitance, 'capacitance')} />}
           <Row
             id="system.resonantFrequency"
@@ -52,11 +55,13 @@ export function ResultsPanel({ result: r, system, stale }: Props) {
               </>
             }
           />
+          </dl>
         </Group>
       )}
 
       {(r.primary || r.tuning) && (
         <Group title="Primary and tap" id="res-primary">
+          <dl>
           {r.tuning && (
             <>
               <Row id="tuning.targetFrequency" label="Tuning target (with streamer allowance)" value={q(r.tuning.targetFrequency, 'frequency')} />
@@ -74,11 +79,13 @@ export function ResultsPanel({ result: r, system, stale }: Props) {
               <Row id="primary.outerDiameter" label="Primary outside diameter" value={q(r.primary.outerDiameter, 'length', o)} />
             </>
           )}
+          </dl>
         </Group>
       )}
 
       {r.coupling && (
         <Group title="Coupling" id="res-coupling">
+          <dl>
           <Row id="coupling.k" label="Coupling coefficient k, all turns" strong value={formatFixed(r.coupling.k, 3)} />
           {r.coupling.kAtTap !== null && <Row id="coupling.kAtTap" label="k with the turns up to the tap" value={formatFixed(r.coupling.kAtTap, 3)} />}
           <Row id="coupling.mutualInductance" label="Mutual inductance" value={q(r.coupling.mutualInductance, 'inductance')} />
@@ -97,6 +104,7 @@ export function ResultsPanel({ result: r, system, stale }: Props) {
               />
             </>
           )}
+          </dl>
         </Group>
       )}
 
@@ -104,6 +112,7 @@ export function ResultsPanel({ result: r, system, stale }: Props) {
         <Group title="Tank and supply" id="res-tank">
           {r.tank && (
             <>
+              <dl>
               <Row id="tank.capacitance" label="Tank capacitance" value={q(r.tank.capacitance, 'capacitance')} />
               {r.tank.voltageRating !== null && <Row id="tank.voltageRating" label="Bank voltage rating" value={q(r.tank.voltageRating, 'voltage')} />}
               {r.tank.perUnitVoltage !== null && <Row id="tank.perUnitVoltage" label="Voltage across each capacitor at the supply peak" value={q(r.tank.perUnitVoltage, 'voltage')} />}
@@ -117,6 +126,7 @@ export function ResultsPanel({ result: r, system, stale }: Props) {
                   note={<>{r.tank.bleeder.count} resistors; the bank falls to about 1 % in {q(4.6 * r.tank.bleeder.timeConstant, 'time', { digits: 2 })}.</>}
                 />
               )}
+              </dl>
               <SafetyNote kind="stored-energy" className="mt-2">
                 <p className="mt-1">{r.tank.caution}</p>
               </SafetyNote>
@@ -124,6 +134,7 @@ export function ResultsPanel({ result: r, system, stale }: Props) {
           )}
           {r.supply && (
             <div className="mt-3">
+              <dl>
               <Row id="supply.peakVoltage" label="Supply peak voltage" value={q(r.supply.peakVoltage, 'voltage')} />
               {r.supply.ratedPower !== null && <Row id="supply.ratedPower" label="Rated power" value={q(r.supply.ratedPower, 'power')} />}
               {r.supply.resonantCapacitance !== null && <Row id="supply.resonantCapacitance" label="Capacitance resonant with the transformer" value={q(r.supply.resonantCapacitance, 'capacitance')} />}
@@ -132,8 +143,16 @@ export function ResultsPanel({ result: r, system, stale }: Props) {
               {r.supply.energyPerBang !== null && <Row id="supply.energyPerBang" label="Energy per firing" value={q(r.supply.energyPerBang, 'energy')} />}
               {r.supply.powerAtBreakRate !== null && <Row id="supply.powerAtBreakRate" label="Power at the break rate" value={q(r.supply.powerAtBreakRate, 'power')} />}
               {r.supply.sparkLengthEstimate !== null && (
-                <Row id="supply.sparkLengthEstimate" label="Spark length, rough rule of thumb" value={q(r.supply.sparkLengthEstimate, 'length', o)} note={r.supply.sparkLengthNote ?? undefined} />
+                <Row id="supply.sparkLengthEstimate" label="Spark length, rough rule of thumb" value={q(r.supply.sparkLengthEstimate, 'length', o)}
+                  note={
+                    <>
+                      {r.supply.sparkLengthNote} Strikes can reach at least this far from the topload: keep people, pets and electronics well outside{' '}
+                      {q(r.supply.sparkLengthEstimate, 'length', o)} of it.
+                    </>
+                  }
+                />
               )}
+              </dl>
               <SafetyNote kind="supply" className="mt-2">
                 <p className="mt-1">{r.supply.caution}</p>
               </SafetyNote>

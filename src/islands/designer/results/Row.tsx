@@ -21,7 +21,7 @@ export function Group({ title, children, id }: { title: string; children: ReactN
       <h3 id={id} className="mb-2 text-base font-semibold">
         {title}
       </h3>
-      <dl>{children}</dl>
+      {children}
     </section>
   );
 }
