@@ -8,7 +8,7 @@ import { startServer } from '../../tests/helpers/server';
 
 const CHROMIUM_ARGS = ['--headless', '--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'];
 const DESIGNER = '/designs/new?example=sign-transformer-toroid';
-const STATIC_PAGES = ['/', '/safety', '/methods', '/sign-in'];
+const STATIC_PAGES = ['/', '/safety', '/methods'];
 const KEYSTROKES = 20;
 
 interface JsLoad {

@@ -46,7 +46,7 @@ test('share a design, open the link in a fresh browser, see its frequency, copy 
   await expect(visitor.getByTestId('shared-name')).toHaveText('Pier Street coil');
   await expect(visitor.locator('[data-figure="loadedFrequency"]')).toHaveText(frequency);
   await expect(visitor.getByText('Stored energy can kill')).toBeVisible();
-  await expect(visitor.getByRole('link', { name: 'Sign in' })).toBeVisible();
+  await expect(visitor.locator('#main').getByRole('link', { name: 'Sign in' })).toBeVisible();
 
   // The visitor makes an account and copies the design into it.
   await signUp(visitorCtx.request, 'Visitor Viggo');

@@ -114,12 +114,3 @@ describe('evaluateTank / evaluateSupply', () => {
     expect(s.peakVoltage).toBe(340);
   });
 });
-
-describe('systemCases (the reference cases the validation page lists)', async () => {
-  const { systemCases } = await import('../../src/lib/validation/cases-system');
-  for (const c of systemCases) {
-    it(`${c.id}: ${c.quantity} agrees with ${c.kind} reference within ${c.tolerance}`, () => {
-      assertClose(c.compute(), c.reference, c.tolerance, `${c.id} (${JSON.stringify(c.inputs)}) [${c.unit}]`);
-    });
-  }
-});

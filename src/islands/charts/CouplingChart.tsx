@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import type { CouplingCurve } from '../../workers/protocol';
 import { axisUnit, formatFixed, formatLength, type UnitSystem } from '~/lib/format';
 import { ChartFrame } from './ChartFrame';
@@ -29,4 +30,4 @@ export function CouplingChart({ curve, system }: { curve: CouplingCurve; system:
   );
 }
 
-export default CouplingChart;
+export default memo(CouplingChart);

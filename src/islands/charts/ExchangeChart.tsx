@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import type { ExchangeCurve } from '../../workers/protocol';
 import { formatPercent, formatQuantity } from '~/lib/format';
 import { ChartFrame } from './ChartFrame';
@@ -40,4 +41,4 @@ export function ExchangeChart({ curve }: { curve: ExchangeCurve }) {
   );
 }
 
-export default ExchangeChart;
+export default memo(ExchangeChart);

@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { axisUnit, type DisplayKind, type UnitSystem } from '~/lib/format';
 import { ChartFrame } from './ChartFrame';
 import { CsvButton } from './CsvButton';
@@ -56,4 +57,4 @@ export function SweepChart({ rows, xName, xKind, xSiUnit, series, system, filena
   );
 }
 
-export default SweepChart;
+export default memo(SweepChart);

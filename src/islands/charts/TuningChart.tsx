@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import type { TuningCurve } from '../../workers/protocol';
 import { formatFixed } from '~/lib/format';
 import { ChartFrame } from './ChartFrame';
@@ -37,4 +38,4 @@ export function TuningChart({ curve }: { curve: TuningCurve }) {
   );
 }
 
-export default TuningChart;
+export default memo(TuningChart);

@@ -120,8 +120,8 @@ function DesignerInner({ signedIn, unitSystem, record, start, signInHref = '/sig
 
   useEffect(() => setServerIssues([]), [inputKey]);
 
-  const liveIssues = live.status === 'invalid' ? live.issues : [];
-  const warnings: SolverWarning[] = live.status === 'ok' ? live.result.warnings : [];
+  const liveIssues = useMemo(() => (live.status === 'invalid' ? live.issues : []), [live]);
+  const warnings = useMemo<SolverWarning[]>(() => (live.status === 'ok' ? live.result.warnings : []), [live]);
   const feedback = useMemo<FieldFeedback>(
     () => ({
       errorFor: (path) =>

@@ -1,4 +1,4 @@
-import { useEffect, useId, useState } from 'react';
+import { memo, useEffect, useId, useState } from 'react';
 import type { DesignInput } from '~/lib/design';
 import type { DesignSI, Result } from '~/solver';
 import { formatLength, type UnitSystem } from '~/lib/format';
@@ -25,7 +25,7 @@ const MM = 1000; // drawing units: millimetres, so stroke widths and fonts stay 
  * the primary's conductors (the turns up to the tap in the accent colour), the secondary winding on
  * its form and the topload, with the key dimensions. Read-only; works from a stored design too.
  */
-export function CoilDrawing({ design, result, system = 'metric', className }: Props) {
+function CoilDrawingView({ design, result, system = 'metric', className }: Props) {
   const titleId = useId();
   const given = isDesignSI(design) ? design : null;
   const [parsed, setParsed] = useState<DesignSI | null>(null);
@@ -168,5 +168,8 @@ export function CoilDrawing({ design, result, system = 'metric', className }: Pr
     </figure>
   );
 }
+
+/** Memoised: the drawing redraws only when the design, the result or the units change. */
+export const CoilDrawing = memo(CoilDrawingView);
 
 export default CoilDrawing;

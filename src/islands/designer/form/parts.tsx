@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { useFormContext, useWatch } from 'react-hook-form';
 import type { UnitSystem } from '~/lib/format';
 import type { FormValues } from './values';
@@ -12,7 +13,7 @@ type PartProps = { system: UnitSystem };
 const lengthHint = (system: UnitSystem, example: string, exampleMetric: string) =>
   `A length with its unit, e.g. ${system === 'imperial' ? example : exampleMetric}`;
 
-export function SecondaryPart({ system }: PartProps) {
+export const SecondaryPart = memo(function SecondaryPart({ system }: PartProps) {
   const mode = useWatch<FormValues, 'secondary.wireMode'>({ name: 'secondary.wireMode' });
   return (
     <Part id="part-secondary" title="Secondary" ownPaths={['secondary', 'secondary.wire']}>
@@ -43,9 +44,9 @@ export function SecondaryPart({ system }: PartProps) {
       <Field path="groundClearance" label="Primary plane above the floor" hint="Height of z = 0 over the ground plane; empty for 0.5 m" />
     </Part>
   );
-}
+});
 
-export function ToploadPart({ system }: PartProps) {
+export const ToploadPart = memo(function ToploadPart({ system }: PartProps) {
   const shape = useWatch<FormValues, 'topload.shape'>({ name: 'topload.shape' });
   return (
     <Part id="part-topload" title="Topload" ownPaths={['topload']}>
@@ -68,9 +69,9 @@ export function ToploadPart({ system }: PartProps) {
       {shape !== 'none' && <Field path="topload.elevation" label="Topload centre above winding top" hint="From the top turn to the topload's centre" />}
     </Part>
   );
-}
+});
 
-export function PrimaryPart({ system }: PartProps) {
+export const PrimaryPart = memo(function PrimaryPart({ system }: PartProps) {
   const { register } = useFormContext<FormValues>();
   const { readOnly } = useFieldFeedback();
   const enabled = useWatch<FormValues, 'primary.enabled'>({ name: 'primary.enabled' });
@@ -110,9 +111,9 @@ export function PrimaryPart({ system }: PartProps) {
       )}
     </Part>
   );
-}
+});
 
-export function TankPart() {
+export const TankPart = memo(function TankPart() {
   const mode = useWatch<FormValues, 'tank.mode'>({ name: 'tank.mode' });
   return (
     <Part id="part-tank" title="Tank capacitor" ownPaths={['tank']}>
@@ -136,9 +137,9 @@ export function TankPart() {
       )}
     </Part>
   );
-}
+});
 
-export function SupplyPart() {
+export const SupplyPart = memo(function SupplyPart() {
   const kind = useWatch<FormValues, 'supply.kind'>({ name: 'supply.kind' });
   return (
     <Part id="part-supply" title="Supply" ownPaths={['supply']}>
@@ -162,9 +163,9 @@ export function SupplyPart() {
       {kind === 'solid-state' && <Field path="supply.busVoltage" label="DC bus voltage" hint='e.g. "340 V"' />}
     </Part>
   );
-}
+});
 
-export function TuningPart({ system }: PartProps) {
+export const TuningPart = memo(function TuningPart({ system }: PartProps) {
   const mode = useWatch<FormValues, 'tuning.streamerMode'>({ name: 'tuning.streamerMode' });
   return (
     <Part id="part-tuning" title="Tuning" ownPaths={['tuning']}>
@@ -184,4 +185,4 @@ export function TuningPart({ system }: PartProps) {
       <Field path="tuning.targetCoupling" label="Target coupling k" inputMode="decimal" hint="e.g. 0.15; the results give the secondary elevation for it" />
     </Part>
   );
-}
+});

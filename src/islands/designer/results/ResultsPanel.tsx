@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import type { Result } from '~/solver';
 import { formatFixed, formatPercent, formatQuantity as q, MISSING, type UnitSystem } from '~/lib/format';
 import { SafetyNote } from '~/components/SafetyNote';
@@ -7,7 +8,7 @@ import { TapCallout } from './TapCallout';
 type Props = { result: Result; system: UnitSystem; stale?: boolean };
 
 /** Every result of the solver, grouped the way a builder works through a coil. */
-export function ResultsPanel({ result: r, system, stale }: Props) {
+export const ResultsPanel = memo(function ResultsPanel({ result: r, system, stale }: Props) {
   const o = { system };
   const band = r.uncertainty?.loadedFrequency;
   const ratio = r.secondary && r.system ? r.secondary.resonantFrequency / r.system.quarterWaveFrequency : null;
@@ -179,7 +180,7 @@ export function ResultsPanel({ result: r, system, stale }: Props) {
       {!r.system && <p className="text-sm text-ink-soft">{MISSING}</p>}
     </div>
   );
-}
+});
 
 /** The input a warning's path points at, or its part when the field is not on screen. */
 function anchorFor(path: string): string {
