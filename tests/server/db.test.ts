@@ -1,0 +1,57 @@
+import { describe, expect, it } from 'vitest';
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { count } from 'drizzle-orm';
+import { openDb, prepareDb } from '../../src/server/db/client';
+import { designs, user, designRevisions } from '../../src/server/db/schema';
+import { seedDemo } from '../../scripts/seed-demo';
+
+describe('openDb / prepareDb', () => {
+  it('a file database gets WAL, foreign keys and every migration, in a folder it creates', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'cw-db-'));
+    try {
+      const url = `file:${join(dir, 'nested/folder/app.db')}`;
+      const db = openDb(url);
+      await prepareDb(db, url);
+      const mode = await db.$client.execute('PRAGMA journal_mode');
+      expect(String(mode.rows[0][0])).toBe('wal');
+      const fk = await db.$client.execute('PRAGMA foreign_keys');
+      expect(Number(fk.rows[0][0])).toBe(1);
+      const tables = (await db.$client.execute("select name from sqlite_master where type='table'")).rows.map((r) => String(r[0]));
+      for (const t of ['user', 'session', 'account', 'verification', 'designs', 'design_revisions', 'design_members', 'design_shares', 'measurements', 'attachments']) {
+        expect(tables).toContain(t);
+      }
+      await prepareDb(db, url); // applying the migrations again is harmless
+      db.$client.close();
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  });
+
+  it('a design row cannot point at a missing owner (foreign keys enforced)', async () => {
+    const db = openDb(':memory:');
+    await prepareDb(db, ':memory:');
+    await expect(db.insert(designs).values({ id: 'd1', ownerId: 'nobody', name: 'x', design: {} })).rejects.toThrow();
+  });
+});
+
+describe('seedDemo', () => {
+  it('seeds the demo scenario once; a second run changes nothing', async () => {
+    const db = openDb(':memory:');
+    await prepareDb(db, ':memory:');
+    const first = await seedDemo(db);
+    expect(first.created).toBe(true);
+    const countsOf = async () => ({
+      users: (await db.select({ n: count() }).from(user))[0].n,
+      designs: (await db.select({ n: count() }).from(designs))[0].n,
+      revisions: (await db.select({ n: count() }).from(designRevisions))[0].n,
+    });
+    const before = await countsOf();
+    expect(before.users).toBe(3);
+    expect(before.designs).toBe(3);
+    const second = await seedDemo(db);
+    expect(second.created).toBe(false);
+    expect(await countsOf()).toEqual(before);
+  });
+});
