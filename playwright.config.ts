@@ -13,7 +13,9 @@ export default defineConfig({
   expect: { timeout: 10_000 },
   fullyParallel: false,
   workers: 1,
-  retries: 0,
+  // One retry absorbs a dropped keep-alive connection on a loaded machine; a real failure fails twice.
+  retries: 1,
+  outputDir: 'test-results/playwright-artifacts',
   reporter: [['list'], ['json', { outputFile: process.env.PW_JSON ?? 'test-results/playwright.json' }]],
   use: {
     baseURL,

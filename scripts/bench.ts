@@ -65,3 +65,16 @@ for (const s of sections) {
   const r = time(s);
   console.log(`${s.name}\n  median ${r.median.toFixed(3)} ms, min ${r.min.toFixed(3)} ms (target ${s.target}, ${s.repeats} runs)`);
 }
+
+// The page-weight and keystroke figures need a build to serve.
+{
+  const { existsSync } = await import('node:fs');
+  const { spawnSync } = await import('node:child_process');
+  const dist = process.env.COILWRIGHT_DIST || 'dist';
+  if (!existsSync(`${dist}/server/entry.mjs`)) {
+    console.log(`building into ${dist}/ for the page benchmarks…`);
+    spawnSync(process.execPath, ['node_modules/astro/astro.js', 'build', '--outDir', dist], { stdio: 'ignore' });
+  }
+  const { runDesignerBench } = await import('./bench/designer');
+  await runDesignerBench();
+}

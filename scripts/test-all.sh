@@ -21,7 +21,7 @@ counts=$(node -e '
 const fs = require("fs");
 let p = 0, f = 0;
 try { const v = JSON.parse(fs.readFileSync("test-results/vitest.json", "utf8")); p += v.numPassedTests; f += v.numFailedTests + (v.numRuntimeErrorTestSuites || 0); } catch { f += 1; }
-try { const w = JSON.parse(fs.readFileSync("test-results/playwright.json", "utf8")); p += w.stats.expected; f += w.stats.unexpected + (w.errors?.length ? 1 : 0); } catch { f += 1; }
+try { const w = JSON.parse(fs.readFileSync("test-results/playwright.json", "utf8")); p += w.stats.expected + (w.stats.flaky || 0); f += w.stats.unexpected + (w.errors?.length ? 1 : 0); } catch { f += 1; }
 console.log(p + " passed, " + f + " failed");
 ')
 echo "$counts"

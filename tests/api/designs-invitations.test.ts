@@ -11,7 +11,6 @@ afterAll(async () => {
   await s?.stop();
 });
 
-const hex = /[0-9a-f]{64}/;
 
 describe('invitations', () => {
   it('POST /api/v1/designs/:id/invitations from an unconfirmed owner is 403 email_not_verified and sends nothing', async () => {
@@ -83,7 +82,6 @@ describe('invitations', () => {
       .join('');
     expect(db).not.toContain(token);
     expect(db).toContain(createHash('sha256').update(token).digest('hex'));
-    expect(hex.test(createHash('sha256').update(token).digest('hex'))).toBe(true);
   });
 
   it('a viewer reads but cannot save (403) and the design is unchanged', async () => {

@@ -174,6 +174,20 @@ describe('designs routes by role', () => {
     expect((await (await c.owner.get(`/api/v1/designs/${designId}`)).json()).role).toBe('owner');
   });
 
+  it('pages history, people, one revision and compare: 200 for members and admin, 404 for a stranger, sign-in for anonymous', async () => {
+    for (const path of [`/designs/${designId}/history`, `/designs/${designId}/people`, `/designs/${designId}/revisions/1`, `/designs/${designId}/compare?from=1&to=2`]) {
+      const got: Partial<Record<Who, number>> = {};
+      for (const w of everyone) {
+        const r = await c[w].get(path);
+        got[w] = r.status;
+        const html = await r.text();
+        if (w === 'stranger' || w === 'anonymous') expect(html, `${w} on ${path}`).not.toContain(NAME);
+        else expect(html).toContain(NAME);
+      }
+      expect({ path, ...got }).toEqual({ path, owner: 200, editor: 200, viewer: 200, admin: 200, stranger: 404, anonymous: 302 });
+    }
+  });
+
   it('DELETE /api/v1/designs/:id is the owner’s; others 403, a stranger 404, and the design stays until the owner deletes it', async () => {
     for (const w of ['editor', 'viewer', 'admin', 'stranger', 'anonymous'] as const) {
       const r = await c[w].del(`/api/v1/designs/${designId}`);

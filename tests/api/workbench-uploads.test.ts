@@ -20,7 +20,7 @@ async function newDesign(name: string): Promise<string> {
   return (await r.json()).id;
 }
 
-function form(bytes: Uint8Array | string, name: string, type: string): FormData {
+function form(bytes: Uint8Array<ArrayBuffer> | string, name: string, type: string): FormData {
   const f = new FormData();
   f.set('file', new File([bytes], name, { type }));
   return f;
@@ -43,7 +43,7 @@ function filesUnder(dir: string): string[] {
   }
 }
 
-let png: Uint8Array;
+let png: Uint8Array<ArrayBuffer>;
 
 beforeAll(async () => {
   s = await startServer();

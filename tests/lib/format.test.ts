@@ -97,6 +97,12 @@ describe('convertLengthText', () => {
     expect(convertLengthText('101.6 mm', 'imperial')).toBe('4 in');
   });
 
+  it('convertLengthText gives back exactly the text typed when switched there and back', () => {
+    const there = convertLengthText('0.6 m', 'imperial');
+    expect(there).toBe('23.622 in');
+    expect(convertLengthText(there, 'metric')).toBe('0.6 m');
+  });
+
   it('convertLengthText leaves text already in the target system as typed', () => {
     expect(convertLengthText('0.6 m', 'metric')).toBe('0.6 m');
     expect(convertLengthText('2 ft', 'imperial')).toBe('2 ft');

@@ -25,6 +25,12 @@ const solidStateCoil = {
   supply: { kind: 'solid-state', busVoltage: '340 V' },
 };
 
+/** Signs up through better-auth as a browser would, with the Origin header its CSRF check expects. */
+async function signUp(c: Client, name: string, email: string): Promise<void> {
+  const r = await c.req('POST', '/api/auth/sign-up/email', { name, email, password: 'correct-horse-9' }, { origin: s.url });
+  expect(r.status, await r.clone().text()).toBe(200);
+}
+
 async function createDesign(c: Client, name: string, design: unknown): Promise<string> {
   const r = await c.post('/api/v1/designs', { name, design });
   expect(r.status, await r.clone().text()).toBe(201);
@@ -34,7 +40,7 @@ async function createDesign(c: Client, name: string, design: unknown): Promise<s
 describe('GET /designs/:id/event', () => {
   it('GET /designs/:id/event draws the perimeter from the spark-length estimate plus 10 ft for the owner', async () => {
     const owner = new Client(s.url);
-    await owner.signUp('Event Owner', `event-owner-${Date.now()}@example.test`);
+    await signUp(owner, 'Event Owner', `event-owner-${Date.now()}@example.test`);
     const id = await createDesign(owner, 'Open-day coil', sparkGapCoil);
     const detail = (await (await owner.get(`/api/v1/designs/${id}`)).json()) as {
       result: { supply: { sparkLengthEstimate: number } };
@@ -59,11 +65,11 @@ describe('GET /designs/:id/event', () => {
 
   it('GET /designs/:id/event for a stranger is 404 and shows nothing of the design', async () => {
     const owner = new Client(s.url);
-    await owner.signUp('Private Owner', `event-private-${Date.now()}@example.test`);
+    await signUp(owner, 'Private Owner', `event-private-${Date.now()}@example.test`);
     const id = await createDesign(owner, 'Secret workshop coil', sparkGapCoil);
 
     const stranger = new Client(s.url);
-    await stranger.signUp('Stranger', `event-stranger-${Date.now()}@example.test`);
+    await signUp(stranger, 'Stranger', `event-stranger-${Date.now()}@example.test`);
     const r = await stranger.get(`/designs/${id}/event`);
     expect(r.status).toBe(404);
     expect(await r.text()).not.toContain('Secret workshop coil');
@@ -80,7 +86,7 @@ describe('GET /designs/:id/event', () => {
 
   it('GET /designs/:id/event for a solid-state coil asks for a spark length and uses a stated one', async () => {
     const owner = new Client(s.url);
-    await owner.signUp('Solid Owner', `event-solid-${Date.now()}@example.test`);
+    await signUp(owner, 'Solid Owner', `event-solid-${Date.now()}@example.test`);
     const id = await createDesign(owner, 'Solid-state coil', solidStateCoil);
 
     const ask = await (await owner.get(`/designs/${id}/event`)).text();
@@ -97,7 +103,7 @@ describe('GET /designs/:id/event', () => {
 
   it('GET /designs/:id/event?spark=bad answers 400 with a message naming the field', async () => {
     const owner = new Client(s.url);
-    await owner.signUp('Typo Owner', `event-typo-${Date.now()}@example.test`);
+    await signUp(owner, 'Typo Owner', `event-typo-${Date.now()}@example.test`);
     const id = await createDesign(owner, 'Typo coil', sparkGapCoil);
     const r = await owner.get(`/designs/${id}/event?spark=${encodeURIComponent('3 kg')}`);
     expect(r.status).toBe(400);

@@ -43,7 +43,7 @@ export function ChartFrame({ data, xKey, xLabel, yLabel, lines, refs = [], dots 
             <XAxis dataKey={xKey} type="number" domain={['dataMin', 'dataMax']} tickFormatter={tick} stroke="var(--color-ink-soft)" tick={{ fill: 'var(--color-ink-soft)', fontSize: 12 }}>
               <Label value={xLabel} position="insideBottom" offset={-16} fill="var(--color-ink)" fontSize={13} />
             </XAxis>
-            <YAxis domain={yDomain} tickFormatter={tick} stroke="var(--color-ink-soft)" tick={{ fill: 'var(--color-ink-soft)', fontSize: 12 }} width={64}>
+            <YAxis domain={yDomain} allowDataOverflow={yDomain[0] !== 'auto' && yDomain[1] !== 'auto'} tickFormatter={tick} stroke="var(--color-ink-soft)" tick={{ fill: 'var(--color-ink-soft)', fontSize: 12 }} width={64}>
               <Label value={yLabel} angle={-90} position="insideLeft" style={{ textAnchor: 'middle' }} fill="var(--color-ink)" fontSize={13} offset={0} />
             </YAxis>
             <Tooltip
@@ -51,7 +51,7 @@ export function ChartFrame({ data, xKey, xLabel, yLabel, lines, refs = [], dots 
               labelFormatter={(v) => `${xLabel}: ${typeof v === 'number' ? tick(v) : String(v)}`}
               contentStyle={{ background: 'var(--color-panel)', borderColor: 'var(--color-rule)', color: 'var(--color-ink)' }}
             />
-            {lines.length > 1 && <Legend verticalAlign="top" height={28} />}
+            {lines.length > 1 && <Legend verticalAlign="top" height={30} wrapperStyle={{ fontSize: 13 }} />}
             {refs.map((r) => (
               <ReferenceLine
                 key={`${r.label}-${r.x ?? ''}-${r.y ?? ''}`}
@@ -59,7 +59,7 @@ export function ChartFrame({ data, xKey, xLabel, yLabel, lines, refs = [], dots 
                 y={r.y}
                 stroke={r.color ?? 'var(--color-arc)'}
                 strokeDasharray="5 4"
-                label={{ value: r.label, fill: r.color ?? 'var(--color-arc)', fontSize: 12, position: r.x !== undefined ? 'top' : 'insideTopRight' }}
+                label={{ value: r.label, fill: r.color ?? 'var(--color-arc)', fontSize: 12, position: r.x !== undefined ? 'insideTopLeft' : 'insideTopRight' }}
               />
             ))}
             {lines.map((l) => (

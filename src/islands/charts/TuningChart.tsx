@@ -6,12 +6,12 @@ import { CsvButton } from './CsvButton';
 
 /** Primary + tank frequency against the tap, with the secondary's frequency with and without the streamer allowance. */
 export function TuningChart({ curve }: { curve: TuningCurve }) {
-  const data = curve.rows.map((r) => ({ tap: r.tap, fp: r.primaryFrequency === null ? null : r.primaryFrequency / 1e3 }));
-  const refs = [
-    { y: curve.secondaryFrequency / 1e3, label: 'secondary, no streamers', color: 'var(--color-ink-soft)' },
-    { y: curve.targetFrequency / 1e3, label: 'secondary with streamer allowance', color: 'var(--color-arc)' },
-    ...(curve.tapTurns !== null ? [{ x: curve.tapTurns, label: `tap ${formatFixed(curve.tapTurns, 2)}`, color: 'var(--color-copper)' }] : []),
-  ];
+  const fs = curve.secondaryFrequency / 1e3;
+  const ft = curve.targetFrequency / 1e3;
+  const data = curve.rows.map((r) => ({ tap: r.tap, fp: r.primaryFrequency === null ? null : r.primaryFrequency / 1e3, fs, ft }));
+  const refs = curve.tapTurns !== null ? [{ x: curve.tapTurns, label: `tap ${formatFixed(curve.tapTurns, 2)}`, color: 'var(--color-copper)' }] : [];
+  // the first quarter turn resonates far above the secondary; keep the crossing readable
+  const top = Math.ceil((2.5 * Math.max(fs, ft)) / 10) * 10;
   return (
     <div className="space-y-2" data-testid="tuning-chart">
       <div className="flex justify-end">
@@ -26,12 +26,17 @@ export function TuningChart({ curve }: { curve: TuningCurve }) {
         xKey="tap"
         xLabel="tap, turns from the inner end"
         yLabel="frequency (kHz)"
-        lines={[{ key: 'fp', name: 'primary + tank', color: 'var(--color-copper)' }]}
+        lines={[
+          { key: 'fp', name: 'primary + tank', color: 'var(--color-copper)' },
+          { key: 'fs', name: 'secondary, no streamers', color: 'var(--color-ink-soft)', dashed: true },
+          { key: 'ft', name: 'secondary with streamer allowance', color: 'var(--color-arc)', dashed: true },
+        ]}
         refs={refs}
+        yDomain={[0, top]}
         caption={
           curve.tapLow !== null && curve.tapHigh !== null
-            ? `Where the copper curve crosses the blue line is the tap; search ${formatFixed(Math.min(curve.tapLow, curve.tapHigh), 2)}–${formatFixed(Math.max(curve.tapLow, curve.tapHigh), 2)} turns.`
-            : 'Where the copper curve crosses the blue line is the tap.'
+            ? `Where the copper curve crosses the blue dashed line is the tap; search ${formatFixed(Math.min(curve.tapLow, curve.tapHigh), 2)}–${formatFixed(Math.max(curve.tapLow, curve.tapHigh), 2)} turns.`
+            : 'Where the copper curve crosses the blue dashed line is the tap.'
         }
       />
     </div>

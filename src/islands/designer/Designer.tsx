@@ -382,7 +382,7 @@ function DesignerInner({ signedIn, unitSystem, record, start, signInHref = '/sig
                 <h2 id="results-title" className="text-xl font-semibold">
                   Results
                 </h2>
-                <span className="text-xs text-ink-soft" aria-live="polite" data-testid="solve-state">
+                <span className="text-xs text-ink-soft" aria-live="polite" data-testid="solve-state" data-solve-ms={live.status === 'ok' ? live.ms.toFixed(2) : undefined}>
                   {live.status === 'invalid' ? 'waiting for valid input' : pending ? 'updating…' : live.status === 'ok' ? 'up to date' : ''}
                 </span>
               </div>

@@ -133,7 +133,7 @@ function CoilDrawingView({ design, result, system = 'metric', className }: Props
         <Dimension id="winding-diameter" x1={-wr} x2={wr} y1={y(g.zBottom) + font * 1.4} y2={y(g.zBottom) + font * 1.4} font={font * 0.85} label={`⌀ ${L(2 * g.windingRadius)}`} />
         <Dimension id="winding-length" x1={wr + font * 1.2} x2={wr + font * 1.2} y1={y(g.zTop)} y2={y(g.zBottom)} font={font * 0.85} label={L(g.zTop - g.zBottom)} />
         {Math.abs(g.zBottom) > 1e-6 && (
-          <Dimension id="secondary-elevation" x1={-wr - font * 1.2} x2={-wr - font * 1.2} y1={y(Math.max(g.zBottom, 0))} y2={y(Math.min(g.zBottom, 0))} font={font * 0.85} side="before" label={`${g.zBottom >= 0 ? '↑' : '↓'} ${L(Math.abs(g.zBottom))}`} />
+          <Dimension id="secondary-elevation" x1={-fr * 0.5} x2={-fr * 0.5} y1={y(Math.max(g.zBottom, 0))} y2={y(Math.min(g.zBottom, 0))} font={font * 0.85} side="after" label={`${g.zBottom >= 0 ? '↑' : '↓'} ${L(Math.abs(g.zBottom))}`} />
         )}
         <Dimension id="ground-clearance" x1={-w - side * 0.35} x2={-w - side * 0.35} y1={0} y2={y(g.groundZ)} font={font * 0.85} side="after" label={L(-g.groundZ)} />
         {g.topload && (

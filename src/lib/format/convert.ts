@@ -37,5 +37,12 @@ export function readLength(text: string): { metres: number; system: UnitSystem }
 export function convertLengthText(text: string, system: UnitSystem): string {
   const parsed = readLength(text);
   if (!parsed || parsed.system === system) return text;
-  return lengthInputText(parsed.metres, system);
+  // switching back returns exactly what was typed, so toggling units never drifts a value
+  const earlier = origins.get(text.trim());
+  if (earlier && readLength(earlier)?.system === system) return earlier;
+  const converted = lengthInputText(parsed.metres, system);
+  origins.set(converted, text.trim());
+  return converted;
 }
+
+const origins = new Map<string, string>();

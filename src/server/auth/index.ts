@@ -75,6 +75,8 @@ export function createAuth(o: AuthOptions) {
       },
     },
     advanced: {
+      // Never relaxed by the environment (test runners set TEST=true, which would otherwise skip it).
+      disableOriginCheck: false,
       ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] },
     },
     telemetry: { enabled: false },

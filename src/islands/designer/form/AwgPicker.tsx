@@ -4,6 +4,7 @@ import { formatLength, type UnitSystem } from '~/lib/format';
 import type { FormValues } from './values';
 import { fieldId, useFieldFeedback } from './field-context';
 import { SelectField } from './SelectField';
+import { FieldWarnings } from './FieldWarnings';
 
 const GAUGES = Array.from({ length: 41 - 10 + 1 }, (_, i) => 10 + i);
 const INSULATION = [
@@ -44,6 +45,7 @@ export function AwgPicker({ system }: { system: UnitSystem }) {
           ))}
         </select>
         {error && <p className="cw-field-error">{error}</p>}
+        <FieldWarnings path="secondary.wire.awg" />
       </div>
       <SelectField path="secondary.wire.insulation" label="Enamel" options={INSULATION} />
       <p id={`${id}-readout`} className="cw-hint sm:col-span-2" data-testid="awg-readout">

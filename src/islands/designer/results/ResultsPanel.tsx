@@ -129,7 +129,11 @@ export const ResultsPanel = memo(function ResultsPanel({ result: r, system, stal
               )}
               </dl>
               <SafetyNote kind="stored-energy" className="mt-2">
-                <p className="mt-1">{r.tank.caution}</p>
+                {r.tank.energyAtSupplyPeak !== null && (
+                  <p className="mt-1" data-safety-figure="stored-energy">
+                    This bank holds ½CV² = <strong>{q(r.tank.energyAtSupplyPeak, 'energy')}</strong> at the supply peak: potentially lethal.
+                  </p>
+                )}
               </SafetyNote>
             </>
           )}
@@ -145,17 +149,15 @@ export const ResultsPanel = memo(function ResultsPanel({ result: r, system, stal
               {r.supply.powerAtBreakRate !== null && <Row id="supply.powerAtBreakRate" label="Power at the break rate" value={q(r.supply.powerAtBreakRate, 'power')} />}
               {r.supply.sparkLengthEstimate !== null && (
                 <Row id="supply.sparkLengthEstimate" label="Spark length, rough rule of thumb" value={q(r.supply.sparkLengthEstimate, 'length', o)}
-                  note={
-                    <>
-                      {r.supply.sparkLengthNote} Strikes can reach at least this far from the topload: keep people, pets and electronics well outside{' '}
-                      {q(r.supply.sparkLengthEstimate, 'length', o)} of it.
-                    </>
-                  }
+                  note={r.supply.sparkLengthNote ?? undefined}
                 />
               )}
               </dl>
               <SafetyNote kind="supply" className="mt-2">
-                <p className="mt-1">{r.supply.caution}</p>
+                <p className="mt-1" data-safety-figure="supply">
+                  This supply peaks at <strong>{q(r.supply.peakVoltage, 'voltage')}</strong>
+                  {r.supply.ratedPower !== null ? <> and can deliver {q(r.supply.ratedPower, 'power')}</> : null}.
+                </p>
               </SafetyNote>
             </div>
           )}
