@@ -45,7 +45,8 @@ test('share a design, open the link in a fresh browser, see its frequency, copy 
   await visitor.goto(new URL(url).pathname);
   await expect(visitor.getByTestId('shared-name')).toHaveText('Pier Street coil');
   await expect(visitor.locator('[data-figure="loadedFrequency"]')).toHaveText(frequency);
-  await expect(visitor.getByText('Stored energy can kill')).toBeVisible();
+  await expect(visitor.getByText('Stored energy can kill').first()).toBeVisible();
+  await expect(visitor.getByTestId('design-viewer')).toBeVisible();
   await expect(visitor.locator('#main').getByRole('link', { name: 'Sign in' })).toBeVisible();
 
   // The visitor makes an account and copies the design into it.

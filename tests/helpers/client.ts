@@ -4,7 +4,8 @@ export class Client {
   constructor(readonly base: string) {}
 
   async req(method: string, path: string, body?: unknown, headers: Record<string, string> = {}): Promise<Response> {
-    const h: Record<string, string> = { ...headers };
+    // A browser always sends its origin with a cookie-bearing POST; better-auth refuses one without it.
+    const h: Record<string, string> = { origin: this.base, ...headers };
     if (this.cookies.size) h.cookie = [...this.cookies].map(([k, v]) => `${k}=${v}`).join('; ');
     let payload: BodyInit | undefined;
     if (body instanceof FormData) payload = body;

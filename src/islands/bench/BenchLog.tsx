@@ -1,5 +1,5 @@
 import { useState, type FormEvent } from 'react';
-import { MEASUREMENT_KINDS, MEASUREMENT_KIND_IDS, type MeasurementKind } from '../../lib/troubleshoot';
+import { MEASUREMENT_KINDS, MEASUREMENT_KIND_IDS, type MeasurementKind } from '../../lib/troubleshoot/bench';
 import { createMeasurement, deleteMeasurement, putCalibration, type CalibrationView, type MeasurementRow } from './api';
 import { showValue, unitsFor } from './units';
 

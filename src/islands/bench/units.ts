@@ -1,4 +1,4 @@
-import { MEASUREMENT_KINDS, type MeasurementKind } from '../../lib/troubleshoot';
+import { MEASUREMENT_KINDS, type MeasurementKind } from '../../lib/troubleshoot/bench';
 
 /** Units offered for typing a value of each SI unit, with the factor to SI. First is the default. */
 export const INPUT_UNITS: Record<string, Array<{ label: string; factor: number }>> = {

@@ -1,7 +1,8 @@
 import { SafetyNote } from '~/components/SafetyNote';
 import { summaryBlocks } from '~/lib/library/summary';
-import { figureValue, keyFigures, pick } from '~/lib/library/figures';
-import { formatSI, formatTurns } from '~/lib/library/format';
+import { pick } from '~/lib/library/figures';
+import { formatSI } from '~/lib/library/format';
+import KeyFigures from './KeyFigures';
 
 type Props = { design: unknown; result: unknown; headline?: boolean };
 
@@ -11,34 +12,10 @@ type Props = { design: unknown; result: unknown; headline?: boolean };
  */
 export default function DesignFacts({ design, result, headline = true }: Props) {
   const blocks = summaryBlocks({ design, result, measured: [] });
-  const loaded = figureValue(result, keyFigures[0]);
-  const tap = figureValue(result, keyFigures[3]);
-  const k = figureValue(result, keyFigures[4]);
   const energy = pick(result, 'tank.energyAtSupplyPeak');
   return (
     <div className="space-y-6">
-      {headline && (
-        <dl className="grid gap-3 sm:grid-cols-3">
-          <div className="cw-card">
-            <dt className="text-sm text-ink-soft">Loaded resonant frequency</dt>
-            <dd className="text-2xl font-semibold" data-figure="loadedFrequency">
-              {formatSI(loaded, 'Hz')}
-            </dd>
-          </div>
-          <div className="cw-card">
-            <dt className="text-sm text-ink-soft">Primary tap</dt>
-            <dd className="text-2xl font-semibold" data-figure="tapTurns">
-              {formatTurns(tap)}
-            </dd>
-          </div>
-          <div className="cw-card">
-            <dt className="text-sm text-ink-soft">Coupling k</dt>
-            <dd className="text-2xl font-semibold" data-figure="k">
-              {formatSI(k, '')}
-            </dd>
-          </div>
-        </dl>
-      )}
+      {headline && <KeyFigures result={result} />}
       {result === null && <p className="cw-alert">This design no longer passes the current checks, so no results are shown.</p>}
       <div className="grid gap-6 md:grid-cols-2">
         {blocks.map((b) => (

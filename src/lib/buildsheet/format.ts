@@ -51,36 +51,36 @@ export function duration(s: number): string {
 }
 
 export function frequency(hz: number): string {
-  return hz >= 1e6 ? `${sig(hz / 1e6, 4)} MHz` : `${sig(hz / 1e3, 4)} kHz`;
+  return hz >= 1e6 ? `${plain(hz / 1e6, 4)} MHz` : `${plain(hz / 1e3, 4)} kHz`;
 }
 
 export function capacitance(f: number): string {
-  if (f >= 1e-6) return `${sig(f * 1e6, 4)} µF`;
-  if (f >= 1e-9) return `${sig(f * 1e9, 4)} nF`;
-  return `${sig(f * 1e12, 4)} pF`;
+  if (f >= 1e-6) return `${plain(f * 1e6, 4)} µF`;
+  if (f >= 1e-9) return `${plain(f * 1e9, 4)} nF`;
+  return `${plain(f * 1e12, 4)} pF`;
 }
 
 export function inductance(h: number): string {
-  if (h >= 1e-3) return `${sig(h * 1e3, 4)} mH`;
-  return `${sig(h * 1e6, 4)} µH`;
+  if (h >= 1e-3) return `${plain(h * 1e3, 4)} mH`;
+  return `${plain(h * 1e6, 4)} µH`;
 }
 
 export function voltage(v: number): string {
-  return v >= 1000 ? `${sig(v / 1000, 4)} kV` : `${sig(v, 4)} V`;
+  return v >= 1000 ? `${plain(v / 1000, 4)} kV` : `${plain(v, 4)} V`;
 }
 
 export function resistance(ohm: number): string {
-  if (ohm >= 1e6) return `${sig(ohm / 1e6, 3)} MΩ`;
-  if (ohm >= 1e3) return `${sig(ohm / 1e3, 3)} kΩ`;
-  return `${sig(ohm, 3)} Ω`;
+  if (ohm >= 1e6) return `${plain(ohm / 1e6, 3)} MΩ`;
+  if (ohm >= 1e3) return `${plain(ohm / 1e3, 3)} kΩ`;
+  return `${plain(ohm, 3)} Ω`;
 }
 
 export function power(w: number): string {
-  return `${sig(w, 3)} W`;
+  return `${plain(w, 3)} W`;
 }
 
 export function energy(j: number): string {
-  return `${sig(j, 3)} J`;
+  return `${plain(j, 3)} J`;
 }
 
 export function percent(fraction: number, digits = 1): string {

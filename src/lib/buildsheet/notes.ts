@@ -20,13 +20,13 @@ export const COATING_NOTES: readonly SheetNote[] = [
 ];
 
 export const TRANSFORMER_PROTECTION_NOTES: readonly SheetNote[] = [
-  { text: 'Filter between the transformer and the tank: a 1 kΩ 50 W wire-wound resistor in series with each high-voltage lead (100 W for several transformers in parallel).', source: 'G. (hotstreamer.deanostoybox.com/greg/filter.htm), TRADE §2.12' },
+  { text: 'Filter between the transformer and the tank: a 1 kΩ 50 W wire-wound resistor in series with each high-voltage lead (100 W for several transformers in parallel).', source: 'hotstreamer.deanostoybox.com/greg/filter.htm' },
   { text: 'Bypass capacitors of 1 nF / 10 kV from each lead to the grounded case: two up to about 9 kV, four above.', source: 'hotstreamer.deanostoybox.com/greg/filter.htm' },
   { text: 'Safety gap from each high-voltage terminal to the grounded case, about 1/4 in (6 mm) on a 9 kV transformer.', source: 'hotstreamer.deanostoybox.com/greg/filter.htm' },
   { text: 'Setting it: disconnect the tank; set the gap so it just fails to fire at the highest input the transformer will see; never widen it later to chase spark length; in use, open the main gap until the safety gap fires only now and then.', source: 'G. Reynolds, TCML 2005/Oct/msg00473' },
   { text: 'Build the filter on polyethylene board, not PVC: surface tracking matters more than air spacing.', source: 'D. C. Cox, TCML 2005/Oct/msg00483' },
   { text: 'Ground the transformer case and centre tap to the RF ground.', source: 'TCML 1995/may/msg00010' },
-  { text: 'Ground-fault protection built into a transformer is a safety feature: do not bypass it; choose a supply meant for this use and take professional advice.', source: 'TRADE §4.3; NEC 1999 / UL 2161' },
+  { text: 'Ground-fault protection built into a transformer is a safety feature: do not bypass it; choose a supply meant for this use and take professional advice.', source: 'NEC 1999 / UL 2161; TCML 2002/May/msg00238' },
 ];
 
 export const SOLID_STATE_NOTES: readonly SheetNote[] = [

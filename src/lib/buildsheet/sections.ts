@@ -38,7 +38,7 @@ export function sheetSections(sheet: BuildSheet): SheetSection[] {
       title: 'Secondary: form and winding',
       rows: [
         { label: 'Form outside diameter', value: fmt.lengthShort(s.formDiameter) },
-        { label: 'Form length to cut', value: fmt.lengthShort(s.formLength), note: `winding + ${fmt.lengthShort(o.endMargin)} bare form at each end (at least 1 in; Quick cuts about 3 in over the winding, TRADE §2.14)` },
+        { label: 'Form length to cut', value: fmt.lengthShort(s.formLength), note: `winding + ${fmt.lengthShort(o.endMargin)} bare form at each end (at least 1 in; R. Quick, COILBLD1, cuts the form about 3 in longer than the winding)` },
         { label: 'Winding length', value: fmt.lengthShort(s.windingLength) },
         { label: 'Turns', value: String(s.turns) },
         { label: 'Wire', value: wire, note: `${fmt.lengthFine(s.insulatedDiameter)} over the enamel` },
@@ -94,7 +94,7 @@ export function sheetSections(sheet: BuildSheet): SheetSection[] {
         note: `aims at ${fmt.frequency(p.calibrated.targetFrequency)} with ${fmt.capacitance(p.calibrated.tankCapacitance)}`,
       });
     }
-    rows.push({ label: 'Tuning practice', value: 'start a little low; try taps either side a fraction of a turn at a time at low power', note: 'TRADE §3.3 (hvtesla.com/tuning.html)' });
+    rows.push({ label: 'Tuning practice', value: 'start a little low; try taps either side a fraction of a turn at a time at low power', note: 'hvtesla.com/tuning.html; TCML 2001/May/msg00905' });
     out.push({ id: 'primary', title: 'Primary', rows });
   }
 
@@ -128,10 +128,10 @@ export function sheetSections(sheet: BuildSheet): SheetSection[] {
   const sup = sheet.supply;
   if (sup) {
     const rows: SheetRow[] = [{ label: 'Supply peak voltage', value: fmt.voltage(sup.peakVoltage) }];
-    if (sup.resonantCapacitance !== null) rows.push({ label: 'Resonant capacitance of the transformer', value: fmt.capacitance(sup.resonantCapacitance), note: 'C = I/(2π f V) (TRADE §2.10)' });
-    if (sup.ltrCapacitance !== null) rows.push({ label: 'Larger-than-resonant value', value: fmt.capacitance(sup.ltrCapacitance), note: '1/(4 f Z) (TRADE §2.10)' });
-    if (sup.tankToResonantRatio !== null) rows.push({ label: 'Tank / resonant', value: `${fmt.sig(sup.tankToResonantRatio, 3)} ×`, note: 'near 1 × risks resonant rise with a static or rotary gap (TRADE §2.10)' });
-    if (sup.filterBypassCapacitors !== null) rows.push({ label: 'Filter bypass capacitors', value: `${sup.filterBypassCapacitors} × 1 nF / 10 kV`, note: 'two up to about 9 kV, four above (TRADE §2.12)' });
+    if (sup.resonantCapacitance !== null) rows.push({ label: 'Resonant capacitance of the transformer', value: fmt.capacitance(sup.resonantCapacitance), note: 'C = I/(2π f V) (P. Lawrence, TCML 2003/June/msg00590)' });
+    if (sup.ltrCapacitance !== null) rows.push({ label: 'Larger-than-resonant value', value: fmt.capacitance(sup.ltrCapacitance), note: '1/(4 f Z): charges to full peak in a quarter cycle (bartmcguyer.com, note 1)' });
+    if (sup.tankToResonantRatio !== null) rows.push({ label: 'Tank / resonant', value: `${fmt.sig(sup.tankToResonantRatio, 3)} ×`, note: 'near 1 × risks resonant rise with a static or rotary gap (TCML 2003/June/msg00590; B. Hickman, TCML 1999/January/msg00788)' });
+    if (sup.filterBypassCapacitors !== null) rows.push({ label: 'Filter bypass capacitors', value: `${sup.filterBypassCapacitors} × 1 nF / 10 kV`, note: 'two up to about 9 kV, four above (hotstreamer.deanostoybox.com/greg/filter.htm)' });
     out.push({
       id: 'supply',
       title: 'Supply and protection',

@@ -40,7 +40,7 @@ export const RULES: readonly Rule[] = [
     symptoms: ['short-sparks'],
     cause: 'The tap was set from a predicted frequency your coil does not have',
     threshold: `measured loaded frequency more than ${pct(FREQUENCY_AGREEMENT)} from the prediction`,
-    source: 'Wheeler + Medhurst agree with measurement to about 5 % (TRADE §3.2; TCML 1999/July/msg00259)',
+    source: 'Wheeler + Medhurst agree with measurement to about 5 % (TCML 1999/July/msg00259)',
     nextCheck: 'Adopt the measured loaded frequency on the bench page, move the tap to the calibrated position, then try taps either side at low power.',
     evaluate(ctx) {
       const fm = ctx.bench.loadedFrequency;
@@ -62,7 +62,7 @@ export const RULES: readonly Rule[] = [
     symptoms: ['short-sparks'],
     cause: 'The primary at its tap does not resonate just below the secondary',
     threshold: `primary (measured L at the tap with the tank) more than ${pct(PRIMARY_ABOVE_MAX)} above or ${pct(PRIMARY_BELOW_MAX)} below the secondary`,
-    source: 'tune the primary a little below the loaded secondary, about 5–10 % (TRADE §3.3; hvtesla.com/tuning.html; TCML 2001/May/msg00905)',
+    source: 'tune the primary a little below the loaded secondary, about 5–10 % (hvtesla.com/tuning.html; TCML 2001/May/msg00905)',
     nextCheck: 'Move the tap: outward (more turns) when the primary is above the secondary, inward when far below; re-measure the inductance at the tap.',
     evaluate(ctx) {
       const L = ctx.bench.primaryInductance;
@@ -97,7 +97,7 @@ export const RULES: readonly Rule[] = [
     symptoms: ['racing-sparks', 'primary-strikes'],
     cause: 'Coupling too tight',
     threshold: `k above ${COUPLING_SPARK_GAP_TYPICAL.high} for a spark-gap coil, above ${COUPLING_SOLID_STATE_HIGH} for a solid-state coil`,
-    source: 'spark gap 0.05–0.2 (Stefan’s tech notes, TRADE §2.4); solid state about 0.15–0.3 (TRADE §2.4, from memory)',
+    source: 'spark gap 0.05–0.2 (Stefan’s tech notes, hotstreamer.deanostoybox.com/stk/tc/TECH4.HTM); solid state about 0.15–0.3 (from memory)',
     nextCheck: 'Raise the secondary a little at a time until racing sparks stop, and look for a loose or raised turn where they start.',
     evaluate(ctx) {
       const c = couplingOf(ctx);
@@ -114,7 +114,7 @@ export const RULES: readonly Rule[] = [
     symptoms: ['short-sparks'],
     cause: 'Coupling too loose for a spark gap',
     threshold: `k below ${COUPLING_SPARK_GAP_TYPICAL.low} (spark-gap coils)`,
-    source: 'spark gap 0.05–0.2 (Stefan’s tech notes, TRADE §2.4)',
+    source: 'spark gap 0.05–0.2 (Stefan’s tech notes, hotstreamer.deanostoybox.com/stk/tc/TECH4.HTM)',
     nextCheck: 'Lower the secondary or bring the primary closer, then check for racing sparks again.',
     evaluate(ctx) {
       if (!isSparkGap(ctx)) return notApplicable('This rule is for spark-gap coils.');
@@ -129,7 +129,7 @@ export const RULES: readonly Rule[] = [
     symptoms: ['supply-trips'],
     cause: 'Tank capacitor near the transformer’s resonant value',
     threshold: `tank within ±${pct(RESONANT_BAND)} of C = I/(2π f V)`,
-    source: 'resonant rise can ring the transformer up to destructive voltages (TRADE §2.10; TCML 2003/June/msg00590; B. Hickman, TCML 1999/January/msg00788)',
+    source: 'resonant rise can ring the transformer up to destructive voltages (TCML 2003/June/msg00590; B. Hickman, TCML 1999/January/msg00788)',
     nextCheck: 'Move to a larger-than-resonant tank (about 1.5 × the resonant value) or a smaller one, and check the safety gap setting.',
     evaluate(ctx) {
       const s = ctx.result.supply;
@@ -144,7 +144,7 @@ export const RULES: readonly Rule[] = [
     symptoms: ['short-sparks'],
     cause: 'Tank too large for the transformer to charge',
     threshold: `tank more than ${LTR_EXCESS} × the larger-than-resonant value 1/(4 f Z)`,
-    source: '1/(4 f Z) charges to full peak in a quarter cycle (TRADE §2.10, bartmcguyer.com note 1); the 1.5 × margin is our threshold',
+    source: '1/(4 f Z) charges to full peak in a quarter cycle (bartmcguyer.com, note 1); the 1.5 × margin is our threshold',
     nextCheck: 'Switch out strings of the bank to come nearer the larger-than-resonant value, then retune the tap.',
     evaluate(ctx) {
       const s = ctx.result.supply;
@@ -160,7 +160,7 @@ export const RULES: readonly Rule[] = [
     symptoms: ['supply-trips', 'short-sparks'],
     cause: 'Tank bank rated too close to the supply peak (a failing capacitor shorts the supply)',
     threshold: `string rating below ${BANK_MARGIN_MIN} × the supply peak`,
-    source: 'common practice (TRADE §2.11; no primary source)',
+    source: 'common practice, no primary source found',
     nextCheck: 'With the power off and the bank shorted, check each capacitor; add units in series.',
     evaluate(ctx) {
       const t = ctx.result.tank;
@@ -175,7 +175,7 @@ export const RULES: readonly Rule[] = [
     symptoms: ['racing-sparks'],
     cause: 'Topload missing or small, so streamers break out from the top turns',
     threshold: `topload overall diameter below ${TOPLOAD_MIN_RATIO} × the secondary diameter`,
-    source: 'toroid overall diameter normally 2.5–5 × the secondary (hvtesla.com/toroid_4.html, TRADE §2.7)',
+    source: 'toroid overall diameter normally 2.5–5 × the secondary (hvtesla.com/toroid_4.html)',
     nextCheck: 'Fit a larger topload, or lower it until the top turns stop breaking out.',
     evaluate(ctx) {
       const t = ctx.design.topload;
@@ -191,7 +191,7 @@ export const RULES: readonly Rule[] = [
     symptoms: ['short-sparks'],
     cause: 'A smooth topload without a breakout point holds the charge',
     threshold: 'answer: no breakout point',
-    source: 'mount the topload just below breakout and find the point by trial (hvtesla.com/toroid_4.html, TRADE §2.7)',
+    source: 'mount the topload just below breakout and find the point by trial (hvtesla.com/toroid_4.html)',
     nextCheck: 'Add a short rod or point to the topload, and try the topload a little lower.',
     question: 'breakoutPoint',
     evaluate(ctx) {
@@ -206,7 +206,7 @@ export const RULES: readonly Rule[] = [
     symptoms: ['short-sparks'],
     cause: 'Toroid large for the input power, so it rarely breaks out',
     threshold: `toroid overall diameter above ${TOPLOAD_LARGE_FACTOR} × (expected spark length ÷ 2.5)`,
-    source: 'Freau: toroid major diameter ≈ spark length ÷ 2.5 (TCML 1998, TRADE §2.7); the 1.5 × margin is our threshold',
+    source: 'Freau: toroid major diameter ≈ spark length ÷ 2.5 (TCML 1998); the 1.5 × margin is our threshold',
     nextCheck: 'Add a breakout point or use a smaller toroid at this power.',
     evaluate(ctx) {
       const t = ctx.design.topload;
@@ -223,7 +223,7 @@ export const RULES: readonly Rule[] = [
     symptoms: ['short-sparks', 'racing-sparks', 'primary-strikes', 'supply-trips'],
     cause: 'No dedicated RF ground',
     threshold: 'answer: no dedicated RF ground',
-    source: 'a heavy, dedicated RF ground, not the house wiring ground (TRADE §4.2; TCML 1999/December/msg00046, 1999/January/msg00639)',
+    source: 'a heavy, dedicated RF ground, not the house wiring ground (TCML 1999/December/msg00046, 1999/January/msg00639)',
     nextCheck: 'Run heavy cable from the secondary base, strike rail, safety gaps and transformer case to ground rods; keep the controls on the mains earth.',
     question: 'rfGround',
     evaluate(ctx) {
@@ -237,7 +237,7 @@ export const RULES: readonly Rule[] = [
     symptoms: ['primary-strikes'],
     cause: 'No strike rail to catch strikes before they reach the primary',
     threshold: 'answer: no strike rail',
-    source: 'a grounded rail about 2 in outside and above the primary, not a closed loop (D. C. Cox, TCML 1998/january/msg00706; TRADE §2.6)',
+    source: 'a grounded rail about 2 in outside and above the primary, not a closed loop (D. C. Cox, TCML 1998/january/msg00706)',
     nextCheck: 'Fit a grounded strike rail (a 7/8 turn with a gap) and connect it to the RF ground.',
     question: 'strikeRail',
     evaluate(ctx) {
@@ -251,7 +251,7 @@ export const RULES: readonly Rule[] = [
     symptoms: ['primary-strikes', 'racing-sparks'],
     cause: 'The primary’s inner turn sits close to the secondary',
     threshold: `radial gap between conductor surfaces below ${lengthShort(PRIMARY_CLEARANCE_MIN)}`,
-    source: 'inner turn about 1.5–2 in from the form, 1 in on a small coil (D. C. Cox, TCML 1998; TCML 1997/june/msg00637; TRADE §2.5)',
+    source: 'inner turn about 1.5–2 in from the form, 1 in on a small coil (D. C. Cox, TCML 1998; TCML 1997/june/msg00637)',
     nextCheck: 'Move the inner turn out, raise the secondary, or insulate between them; RF creeps over surfaces 3–4 × farther than through air.',
     evaluate(ctx) {
       const p = ctx.design.primary;
@@ -267,7 +267,7 @@ export const RULES: readonly Rule[] = [
     symptoms: ['supply-trips'],
     cause: 'The transformer’s ground-fault protection trips in Tesla-coil use',
     threshold: 'answer: the transformer has secondary ground-fault protection',
-    source: 'such transformers trip at about 15 mA to ground (UL 2161 / NEC 1999; TCML 2002/May/msg00238; TRADE §1.2)',
+    source: 'such transformers trip at about 15 mA to ground (UL 2161 / NEC 1999; TCML 2002/May/msg00238)',
     nextCheck: 'The protection is a safety feature: do not bypass it. Use a supply intended for this work, and take professional advice.',
     question: 'groundFaultProtection',
     evaluate(ctx) {
@@ -282,7 +282,7 @@ export const RULES: readonly Rule[] = [
     symptoms: ['short-sparks'],
     cause: 'Sparks well short of what the input power usually gives',
     threshold: `measured spark below ${pct(SPARK_SHORTFALL)} of Freau’s estimate`,
-    source: 'Freau: inches ≈ 1.7 × √watts, a rough rule (TCML 1998, TRADE §2.9); the 50 % threshold is ours',
+    source: 'Freau: inches ≈ 1.7 × √watts, a rough rule (TCML 1998); the 50 % threshold is ours',
     nextCheck: 'Work through the triggered causes above; re-measure the straight-line length to a grounded target.',
     evaluate(ctx) {
       const est = ctx.result.supply?.sparkLengthEstimate;
