@@ -81,6 +81,19 @@ describe('POST /api/v1/designs/:id/attachments', () => {
     expect((await list(id)).map((x) => x.id)).toContain(a.id);
   });
 
+  it('POST attachments accepts JPEG and WebP by their content, whatever the name says', async () => {
+    const jpeg = new Uint8Array(await sharp(png).jpeg().toBuffer());
+    const webp = new Uint8Array(await sharp(png).webp().toBuffer());
+    const a = await owner.req('POST', `/api/v1/designs/${id}/attachments`, form(jpeg, 'bench.jpg', 'image/jpeg'));
+    expect(a.status).toBe(201);
+    expect((await a.json()).contentType).toBe('image/jpeg');
+    const b = await owner.req('POST', `/api/v1/designs/${id}/attachments`, form(webp, 'gap', ''));
+    expect(b.status).toBe(400); // no image type declared and no image extension: not taken as a photo
+    const c = await owner.req('POST', `/api/v1/designs/${id}/attachments`, form(webp, 'gap.webp', ''));
+    expect(c.status).toBe(201);
+    expect((await c.json()).contentType).toBe('image/webp');
+  });
+
   it('GET /api/v1/attachments/:id and its thumbnail are 404 for a stranger and an anonymous caller', async () => {
     const [a] = await list(id);
     for (const c of [stranger, anon]) {
