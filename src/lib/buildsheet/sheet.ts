@@ -4,15 +4,15 @@ import { suggestSpool, type SpoolSuggestion } from './spool';
 
 const INCH = 0.0254;
 
-/** Bare form left at each end of the winding: at least 1 in (TRADE §2.14, Quick, COILBLD1). */
+/** Bare form left at each end of the winding: at least 1 in (R. Quick, "COILBLD1" building notes, 1990s, lab-tesla.org; common practice). */
 export const MIN_END_MARGIN = 1 * INCH;
-/** Default end margin: Quick cuts the form about 3 in longer than the winding, 1.5 in each end (TRADE §2.14). */
+/** Default end margin: Quick cuts the form about 3 in longer than the winding, 1.5 in each end (R. Quick, "COILBLD1" building notes, lab-tesla.org; common practice). */
 export const DEFAULT_END_MARGIN = 1.5 * INCH;
-/** Bleeder wattage the trade fits across each capacitor: ½ W (Terry Fritz, TCML 2000; TRADE §2.11). */
+/** Bleeder wattage the trade fits across each capacitor: ½ W (T. Fritz, Tesla Coil Mailing List, Feb 2000, pupman.com archive; common practice). */
 export const BLEEDER_RATED_POWER = 0.5;
-/** Pulse capacitor commonly bought by the hundred for banks: 0.15 µF, 2000 V DC (TRADE §1.2, §2.11, hvtesla.com/mmc.html). */
+/** Pulse capacitor commonly bought by the hundred for banks: 0.15 µF, 2000 V DC (hvtesla.com MMC notes; common practice). */
 export const COMMON_BANK_UNIT = { capacitance: 0.15e-6, voltage: 2000 } as const;
-/** String rating at least 2 × the supply peak (common practice, TRADE §2.11; no primary source). */
+/** String rating at least 2 × the supply peak (common practice; no primary source found). */
 export const BANK_RATING_FACTOR = 2;
 /** Most checkpoints a sheet lists, so a tiny `every` cannot produce a thousand-page table. */
 export const MAX_CHECKPOINTS = 500;
@@ -104,7 +104,7 @@ export interface BuildSheet {
     resonantCapacitance: number | null;
     ltrCapacitance: number | null;
     tankToResonantRatio: number | null;
-    /** bypass capacitors the usual filter puts from the leads to the case: 2 up to 9 kV, 4 above (TRADE §2.12) */
+    /** bypass capacitors the usual filter puts from the leads to the case: 2 up to 9 kV, 4 above (simplified protection filter, hotstreamer.deanostoybox.com/greg/filter.htm; common practice) */
     filterBypassCapacitors: number | null;
   };
 }

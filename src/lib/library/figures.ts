@@ -1,6 +1,6 @@
 /**
  * The key results a builder compares and posts for review, with their SI units. Paths point into the solver's
- * Result (CONTRACT.md); the labels are ours.
+ * result of the public API; the labels are ours.
  */
 export type Figure = { key: string; label: string; path: string; unit: string };
 

@@ -1,6 +1,6 @@
 import { formatSI } from './format';
 
-/** Labels and SI units of the design's input fields (CONTRACT.md "Design"), for summaries and comparisons. */
+/** Labels and SI units of the design's input fields (the public design format), for summaries and comparisons. */
 export const inputFields: Record<string, { label: string; unit: string }> = {
   'secondary.formDiameter': { label: 'Secondary form diameter', unit: 'm' },
   'secondary.turns': { label: 'Secondary turns', unit: 'turns' },

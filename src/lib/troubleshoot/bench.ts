@@ -1,7 +1,7 @@
 import type { Result } from '../../solver';
 import type { BenchValues } from './types';
 
-/** What a builder records on the bench, each with its SI unit and the instrument usually used (TRADE §3.1). */
+/** What a builder records on the bench, each with its SI unit and the instrument usually used (T. Fritz, Tesla Coil Mailing List, May 2002; A. C. M. de Queiroz, same list, Feb 2001; common practice). */
 export const MEASUREMENT_KINDS = {
   'secondary-inductance': { label: 'Secondary inductance', unit: 'H', instrument: 'LCR meter', bench: 'secondaryInductance' },
   'bare-frequency': { label: 'Resonant frequency, bare secondary', unit: 'Hz', instrument: 'signal generator and scope', bench: 'bareFrequency' },

@@ -4,9 +4,9 @@ import { capacitance, frequency, lengthShort, sig, tapPosition } from '../builds
 import type { Rule, RuleOutcome, TroubleshootContext } from './types';
 
 const INCH = 0.0254;
-/** Bare-coil frequency from Wheeler + Medhurst is within about 5 % (TRADE §3.2). */
+/** Bare-coil frequency from Wheeler + Medhurst is within about 5 % (R. G. Medhurst, Wireless Engineer 24, 1947, his stated accuracy; builders' reports on the Tesla Coil Mailing List, 1996–1997). */
 export const FREQUENCY_AGREEMENT = 0.05;
-/** Primary tuned a little below the secondary, about 5–10 % (TRADE §3.3). */
+/** Primary tuned a little below the secondary, about 5–10 % (T. Fritz, Tesla Coil Mailing List, May 2006; hvtesla.com tuning notes; common practice). */
 export const PRIMARY_BELOW_MAX = 0.1;
 export const PRIMARY_ABOVE_MAX = 0.01;
 /** Tank within ±15 % of the transformer's resonant value. */
