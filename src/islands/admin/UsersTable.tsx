@@ -9,6 +9,7 @@ import {
 } from '@tanstack/react-table';
 import { authErrorMessage, errorMessages } from '~/lib/errors';
 import { FormMessage } from '~/components/ui/FormMessage';
+import { SortableTableHead } from '~/components/ui/SortableTableHead';
 import { listUsers, type SiteRoleName, type UserRow } from './list-users';
 import { setUserDisabled, setUserRole } from './update-user';
 
@@ -203,36 +204,7 @@ export default function UsersTable({ currentUserId, pageSize = 25 }: Props) {
       <div className="overflow-x-auto rounded-lg border border-rule bg-panel">
         <table className="w-full min-w-[44rem] border-collapse text-left">
           <caption className="sr-only">Accounts on this site</caption>
-          <thead className="border-b border-rule text-sm text-ink-soft">
-            {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id}>
-                {hg.headers.map((h) => {
-                  const sorted = h.column.getIsSorted();
-                  return (
-                    <th
-                      key={h.id}
-                      scope="col"
-                      className="px-3 py-2 font-medium"
-                      aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}
-                    >
-                      {h.column.getCanSort() ? (
-                        <button
-                          type="button"
-                          className="inline-flex items-center gap-1 rounded font-medium"
-                          onClick={h.column.getToggleSortingHandler()}
-                        >
-                          {flexRender(h.column.columnDef.header, h.getContext())}
-                          <span aria-hidden="true">{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}</span>
-                        </button>
-                      ) : (
-                        flexRender(h.column.columnDef.header, h.getContext())
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
+          <SortableTableHead table={table} />
           <tbody>
             {table.getRowModel().rows.map((r) => (
               <tr key={r.id} className="border-b border-rule last:border-b-0" data-user-id={r.original.id}>

@@ -11,6 +11,7 @@ import {
   type SortingState,
 } from '@tanstack/react-table';
 import { FormMessage } from '~/components/ui/FormMessage';
+import { SortableTableHead } from '~/components/ui/SortableTableHead';
 import { formatSI, formatTurns } from '~/lib/library/format';
 import { Dialog } from './Dialog';
 import { deleteDesign, duplicateDesign, importDesign, listDesigns, renameDesign, type LibraryRole, type LibraryRow } from './library-api';
@@ -216,27 +217,7 @@ export default function LibraryTable({ pageSize = 20 }: Props) {
       <div className="overflow-x-auto rounded-lg border border-rule bg-panel">
         <table className="w-full min-w-[52rem] border-collapse text-left" data-testid="library-table">
           <caption className="sr-only">My designs and designs shared with me</caption>
-          <thead className="border-b border-rule text-sm text-ink-soft">
-            {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id}>
-                {hg.headers.map((h) => {
-                  const sorted = h.column.getIsSorted();
-                  return (
-                    <th key={h.id} scope="col" className="px-3 py-2 font-medium" aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined}>
-                      {h.column.getCanSort() ? (
-                        <button type="button" className="inline-flex items-center gap-1 rounded font-medium" onClick={h.column.getToggleSortingHandler()}>
-                          {flexRender(h.column.columnDef.header, h.getContext())}
-                          <span aria-hidden="true">{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}</span>
-                        </button>
-                      ) : (
-                        flexRender(h.column.columnDef.header, h.getContext())
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
+          <SortableTableHead table={table} />
           <tbody>
             {table.getRowModel().rows.map((r) => (
               <tr key={r.id} className="border-b border-rule last:border-b-0" data-design-id={r.original.id}>
