@@ -65,7 +65,7 @@ export function tankCapacitanceForTap(d: DesignSI, tapTurns: number): number | n
 /**
  * Secondary elevation (bottom of the winding above the primary plane) at which k with all primary turns
  * equals `targetK`. Searches upward from the elevation of strongest coupling, since raising the
- * secondary is how builders loosen coupling (TRADE §2.4); elevations where the primary would cut
+ * secondary is how builders loosen coupling (Stefan's tech notes, hotstreamer.deanostoybox.com/stk/tc/TECH4.HTM; common practice); elevations where the primary would cut
  * through the winding are skipped. Null without a primary or when the target is out of reach.
  */
 export function elevationForCoupling(d: DesignSI, targetK: number): number | null {

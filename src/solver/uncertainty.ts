@@ -9,17 +9,17 @@ import { SPACE_WOUND_FACTOR } from './system/design-warnings';
 
 /** Stated accuracy of each model and measurement the loaded frequency rests on. */
 export const UNCERTAINTY_SOURCES = {
-  /** Medhurst's own claim for his table, about ±5 % (REFERENCES §b1); doubled outside the table. */
+  /** Medhurst's own claim for his table, about ±5 % (R. G. Medhurst, Wireless Engineer 24, 1947, as quoted secondarily); doubled outside the table. */
   selfCapacitance: MEDHURST_ACCURACY,
   /** Current sheet with Rosa's corrections, close-wound: ±0.5 % (helicity neglected; from memory). */
   inductanceCloseWound: 0.005,
-  /** Space-wound coils measure up to about 5 % above the corrected current-sheet value (TRADE §3.2). */
+  /** Space-wound coils measure up to about 5 % above the corrected current-sheet value (Tesla Coil Mailing List, June 1999, pupman.com archive; single report). */
   inductanceSpaceWoundHigh: 0.05,
   /** Topload BEM is exact for an isolated body over a ground plane; nearby objects and the room: ±5 % (common practice). */
   toploadSurroundings: 0.05,
   /** Builder's measurement of the form diameter, ±1 mm by default. */
   formDiameter: 0.001,
-  /** Ring-model primary inductance, ±1.5 %: the spread of the HF and LF ring models and Wheeler's spiral (REFERENCES §c3). */
+  /** Ring-model primary inductance, ±1.5 %: the spread of the HF and LF ring models and Wheeler's spiral (H. A. Wheeler, Proc. IRE 16(10), 1928, from memory). */
   primaryInductance: 0.015,
 } as const;
 
@@ -67,7 +67,7 @@ export function evaluateUncertainty(d: DesignSI, base: UncertaintyBase, options:
   add(
     'inductance',
     spaceWound
-      ? 'Secondary inductance −0.5 %/+5 %: space-wound coils measure above the current-sheet value (TRADE §3.2)'
+      ? 'Secondary inductance −0.5 %/+5 %: space-wound coils measure above the current-sheet value (builders\' reports, Tesla Coil Mailing List, 1999)'
       : 'Secondary inductance ±0.5 %: current sheet with Rosa corrections, helicity neglected (from memory)',
     f(base.inductance * (1 - lLow), base.selfCapacitance, base.toploadCapacitance, base.streamerCapacitance),
     f(base.inductance * (1 + lHigh), base.selfCapacitance, base.toploadCapacitance, base.streamerCapacitance),
@@ -88,7 +88,7 @@ export function evaluateUncertainty(d: DesignSI, base: UncertaintyBase, options:
     const hi = STREAMER_CAPACITANCE_PER_FOOT_RANGE.high / STREAMER_CAPACITANCE_PER_FOOT;
     add(
       'streamerAllowance',
-      'Streamer allowance 0.8–2 pF per foot instead of 1 pF per foot (TRADE §2.8)',
+      'Streamer allowance 0.8–2 pF per foot instead of 1 pF per foot (T. Fritz, Tesla Coil Mailing List, 2002 and 2005; common practice)',
       f(base.inductance, base.selfCapacitance, base.toploadCapacitance, base.streamerCapacitance * lo),
       f(base.inductance, base.selfCapacitance, base.toploadCapacitance, base.streamerCapacitance * hi),
     );

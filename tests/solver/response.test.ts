@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { assertClose } from '../helpers/assertClose';
 import { energyExchange, splitFrequencies, transferTime } from '../../src/solver';
 
-// Closed form for a tuned lossless pair (REFERENCES §f): with y = √L·q,
+// Closed form for a tuned lossless pair ("Electronics" lecture notes §2.7, eqs. 2.99–2.123, confirmed; P. Drude, Ann. Phys. 13, 1904, from memory): with y = √L·q,
 // y1 = y0 cos(ω_B t/2) cos(ω̄ t), y2 = y0 sin(ω_B t/2) sin(ω̄ t).
 function closedForm(L1: number, C1: number, L2: number, k: number, t: number, v0 = 1) {
   const w0 = 1 / Math.sqrt(L1 * C1);
@@ -22,7 +22,7 @@ function closedForm(L1: number, C1: number, L2: number, k: number, t: number, v0
 }
 
 describe('splitFrequencies(f0, k)', () => {
-  it('gives f0/√(1+k) and f0/√(1−k) (REFERENCES §f): 100 kHz, k = 0.2 → 91.287 and 111.803 kHz', () => {
+  it('gives f0/√(1+k) and f0/√(1−k) ("Electronics" lecture notes §2.7, eqs. 2.99–2.123): 100 kHz, k = 0.2 → 91.287 and 111.803 kHz', () => {
     const { fLow, fHigh } = splitFrequencies(100e3, 0.2);
     assertClose(fLow, 100e3 / Math.sqrt(1.2), 1e-14, 'f_lo');
     assertClose(fHigh, 100e3 / Math.sqrt(0.8), 1e-14, 'f_hi');
@@ -35,11 +35,11 @@ describe('splitFrequencies(f0, k)', () => {
 });
 
 describe('transferTime(f0, k)', () => {
-  it('is 1/(2(f_hi − f_lo)) (REFERENCES §f)', () => {
+  it('is 1/(2(f_hi − f_lo)) ("Electronics" lecture notes §2.7, eqs. 2.99–2.123)', () => {
     const { fLow, fHigh } = splitFrequencies(100e3, 0.2);
     assertClose(transferTime(100e3, 0.2), 1 / (2 * (fHigh - fLow)), 1e-14, 't1');
   });
-  it('approaches 1/(2 k f0), about 1/k half-cycles, for small k (REFERENCES §f; TRADE §2.4)', () => {
+  it('approaches 1/(2 k f0), about 1/k half-cycles, for small k ("Electronics" lecture notes §2.7, eqs. 2.99–2.123; Tesla Coil Mailing List, July 1998, common practice)', () => {
     assertClose(transferTime(100e3, 0.01), 1 / (2 * 0.01 * 100e3), 1e-4, 'small k');
     assertClose(transferTime(100e3, 0.2) * 2 * 100e3, 1 / 0.2, 0.03, 'half-cycles at k = 0.2');
   });
@@ -52,7 +52,7 @@ describe('energyExchange(pair)', () => {
   const f0 = 1 / (2 * Math.PI * Math.sqrt(L1 * C1));
   const C2 = 1 / ((2 * Math.PI * f0) ** 2 * L2);
 
-  it('matches the closed-form tuned-pair energies at every sample (REFERENCES §f), k = 0.15', () => {
+  it('matches the closed-form tuned-pair energies at every sample ("Electronics" lecture notes §2.7, eqs. 2.99–2.123), k = 0.15', () => {
     const k = 0.15;
     const run = energyExchange({ L1, C1, L2, C2, k }, { points: 101, stepsPerCycle: 400 });
     const e0 = run.initialEnergy;
@@ -71,14 +71,14 @@ describe('energyExchange(pair)', () => {
     });
   });
 
-  it('empties the primary completely at t1 for k = 5/13, where f_hi/f_lo = 3/2 (REFERENCES §f)', () => {
+  it('empties the primary completely at t1 for k = 5/13, where f_hi/f_lo = √((1+k)/(1−k)) = 3/2 (normal modes, independent computation)', () => {
     const k = 5 / 13;
     const run = energyExchange({ L1, C1, L2, C2, k }, { points: 2, stepsPerCycle: 400 });
     expect(run.residualPrimaryEnergy!).toBeLessThan(1e-6);
     assertClose(run.firstPrimaryMinimum!, transferTime(f0, k), 1e-3, 'minimum at t1');
   });
 
-  it('leaves a little energy behind for other k, its minimum within a quarter cycle of t1 (REFERENCES §f: 7e-4 at k = 0.1)', () => {
+  it('leaves a little energy behind for other k, its minimum within a quarter cycle of t1 (about 7e-4 at k = 0.1 by the closed form of the tuned pair, "Electronics" lecture notes §2.7)', () => {
     const run = energyExchange({ L1, C1, L2, C2, k: 0.1 }, { points: 2, stepsPerCycle: 400 });
     expect(Math.abs(run.firstPrimaryMinimum! - transferTime(f0, 0.1))).toBeLessThanOrEqual(0.25 / f0);
     expect(run.residualPrimaryEnergy!).toBeGreaterThan(1e-5);

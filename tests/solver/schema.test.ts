@@ -22,7 +22,7 @@ function issueAt(input: unknown, path: string) {
 const withSecondary = (patch: Record<string, unknown>) => ({ ...base, secondary: { ...base.secondary, ...patch } });
 
 describe('parseQuantity(value, kind)', () => {
-  it('reads the contract examples into SI base units (1 in = 25.4 mm exactly, NIST SP 811 App. B)', () => {
+  it('reads the examples of the public design format into SI base units (1 in = 25.4 mm exactly, NIST SP 811 App. B)', () => {
     const cases: Array<[string, Parameters<typeof parseQuantity>[1], number]> = [
       ['4.5 in', 'length', 0.1143],
       ['114.3 mm', 'length', 0.1143],
@@ -196,7 +196,7 @@ describe('parseDesign(input)', () => {
     expect(issueAt({}, 'secondary')).toBe('is required');
   });
 
-  it('derives the streamer allowance from a streamer length at 1 pF per foot (TRADE §2.8)', () => {
+  it('derives the streamer allowance from a streamer length at 1 pF per foot (T. Fritz, Tesla Coil Mailing List, May 2002; common practice, single source)', () => {
     const r = parseDesign({ ...base, tuning: { streamerLength: '3 ft' } });
     if (!r.ok) throw new Error('invalid');
     assertClose(r.design.tuning.streamerCapacitance, 3e-12, 1e-12, 'allowance');

@@ -22,9 +22,10 @@ import { qualityFactor, quarterWaveFrequency, resonantFrequencyLC } from '../../
 import { assertClose } from '../helpers/assertClose';
 import pchipFixture from './fixtures/medhurst-pchip.json';
 import nagaokaFixture from './fixtures/nagaoka.json';
+import worked from '../../src/lib/validation/fixtures/worked-examples.json';
 
 describe('nagaokaCoefficient', () => {
-  // Rosa & Grover 1912 / Grover 1946 tables, 4 decimals (from memory, REFERENCES a2).
+  // Rosa & Grover 1912 / Grover 1946 tables, 4 decimals (E. B. Rosa & F. W. Grover, Bull. Bur. Stand. 8(1), 1912; F. W. Grover, Inductance Calculations, 1946; from memory).
   const table: Array<[number, number]> = [
     [0.1, 0.9588], [0.2, 0.9201], [0.5, 0.8181], [1, 0.6884], [2, 0.5255], [4, 0.3654], [5, 0.3198], [10, 0.2033],
   ];
@@ -97,7 +98,8 @@ describe('rosaCorrection', () => {
   });
 
   it('rosaCorrection(N, r, p, d, LF) on the sheet matches the ring-filament sum of a 12-turn helix to 0.05 %', () => {
-    // Ring model (REFERENCES a3): Σ μ0 r[ln(8r/a) − 7/4] + Σ_{i≠j} M_Maxwell; reference 44.10336 µH there.
+    // Ring model: Σ μ0 r[ln(8r/a) − 7/4] + Σ_{i≠j} M_Maxwell; 44.10336 µH by scipy 1.17.1 quadrature of Neumann's
+    // integral (scripts/fixtures/worked_examples.py). Rosa's method: E. B. Rosa, Bull. Bur. Stand. 2(2), 1906 (from memory).
     const n = 12;
     const r = 0.15;
     const p = 0.0127;
@@ -108,8 +110,9 @@ describe('rosaCorrection', () => {
       for (let j = 0; j < n; j++) if (i !== j) rings += mutualInductanceLoops(r, r, Math.abs(i - j) * p);
     }
     const rosa = inductanceSolenoidLorenz(n, r, n * p) - rosaCorrection(n, r, p, 2 * a, false);
-    assertClose(rosa, 4.411364e-5, 1e-6, 'Rosa-corrected helix vs REFERENCES a3');
+    assertClose(rosa, worked.rosaHelix.L, 1e-6, 'Rosa-corrected helix vs its independent computation (mpmath sheet, scipy GMD B)');
     assertClose(rosa, rings, 5e-4, 'Rosa-corrected helix vs ring sum');
+    assertClose(rings, worked.ringPrimaries.find((q) => q.shape === 'helical')!.Llf, 1e-9, 'ring sum vs scipy quadrature');
   });
 });
 
@@ -134,8 +137,8 @@ describe('inductanceSolenoidRoundWire', () => {
 });
 
 describe('inductanceSolenoidWheeler1928', () => {
-  it('inductanceSolenoidWheeler1928(12, 0.15, 0.1524) is the 44.38 µH worked example (REFERENCES c3)', () => {
-    assertClose(inductanceSolenoidWheeler1928(12, 0.15, 0.1524), 44.38e-6, 2e-4, 'helix Wheeler worked example');
+  it('inductanceSolenoidWheeler1928(12, 0.15, 0.1524) is the 44.38 µH worked example (the Wheeler inch formula evaluated in inches, scripts/fixtures/worked_examples.py)', () => {
+    assertClose(inductanceSolenoidWheeler1928(12, 0.15, 0.1524), worked.wheelerSolenoid.L, 2e-4, 'helix Wheeler worked example');
   });
 
   it('inductanceSolenoidWheeler1928(n, r, ℓ) is 0.276 % below μ0πr²N²/(ℓ + 0.9r)', () => {

@@ -24,7 +24,7 @@ const medium = exampleDesigns.find((e) => e.id === 'sign-transformer-toroid')!.d
 const codes = (r: Result) => r.warnings.map((w) => w.code);
 
 describe('solve(design) result shape', () => {
-  it('has exactly the contract sections and keys', () => {
+  it('has exactly the result sections and keys of the public API', () => {
     const r = solve(si(medium));
     for (const key of ['secondary', 'topload', 'system', 'primary', 'coupling', 'tuning', 'tank', 'supply', 'warnings']) {
       expect(r).toHaveProperty(key);
@@ -101,7 +101,10 @@ describe('solve(design) datums', () => {
 });
 
 describe('solve(design) against trade figures', () => {
-  it('reproduces the 4 in × 20 in, 740-turn #22 coil: L ≈ 10 mH, C_self ≈ 8.2 pF, f ≈ 1.7 × quarter-wave (TRADE §2.3, Nicholson)', () => {
+  it('reproduces the 4 in × 20 in, 740-turn #22 coil: L ≈ 10 mH, C_self ≈ 8.2 pF, f ≈ 1.7 × quarter-wave (Wheeler 1928, Medhurst 1947; P. Nicholson, Tesla Coil Mailing List, December 2009)', () => {
+    // The coil: Tesla Coil Mailing List, June 1997 (pupman.com archive). References by hand from published
+    // formulas: H. A. Wheeler, Proc. IRE 16(10), 1928 (from memory): 2²·740²/(9·2 + 10·20) µH = 10.05 mH;
+    // R. G. Medhurst, Wireless Engineer 24, 1947, table H(ℓ/D = 5) = 0.81 pF/cm × 10.16 cm = 8.2 pF.
     // 740 turns over 20 in: pitch 0.686 mm over 0.644 mm bare 22 AWG
     const r = solve(si({ secondary: { formDiameter: '4 in', turns: 740, wire: { diameter: awgDiameter(22), insulatedDiameter: 0.0006864 }, windingLength: '20 in' } }));
     assertClose(r.secondary!.inductance, 10e-3, 0.03, 'L');
@@ -114,7 +117,7 @@ describe('solve(design) against trade figures', () => {
 
 describe('solve(design) warnings', () => {
   const sec = { formDiameter: '4 in', turns: 1000, wire: { awg: 24, insulation: 'heavy' as const } };
-  it('aspect_ratio_low and aspect_ratio_high on secondary.windingLength (2.5–5 : 1, TRADE §2.1)', () => {
+  it('aspect_ratio_low and aspect_ratio_high on secondary.windingLength (2.5–5 : 1, M. Rzeszotarski, Tesla Coil Mailing List, 1997)', () => {
     const low = solve(si({ secondary: { ...sec, formDiameter: '12 in', turns: 400 } }));
     expect(codes(low)).toContain('aspect_ratio_low');
     expect(low.warnings.find((w) => w.code === 'aspect_ratio_low')!.path).toBe('secondary.windingLength');
@@ -133,7 +136,7 @@ describe('solve(design) warnings', () => {
     const r = solve(si({ secondary: { ...sec, elevation: '2 in' }, primary: { shape: 'flat', innerDiameter: '3 in', turns: 10, conductorDiameter: '0.25 in', spacing: '0.25 in' } }));
     expect(r.warnings.find((w) => w.code === 'primary_inside_form')?.path).toBe('primary.innerDiameter');
   });
-  it('coupling_high_for_spark_gap above k = 0.2 (TRADE §2.4), not for the same coil on solid state', () => {
+  it('coupling_high_for_spark_gap above k = 0.2 (Stefan’s tech notes, hotstreamer.deanostoybox.com), not for the same coil on solid state', () => {
     const tight: DesignInput = {
       ...medium,
       secondary: { ...medium.secondary, elevation: '-4 in' },
@@ -153,7 +156,7 @@ describe('solve(design) warnings', () => {
     expect(r.warnings.find((w) => w.code === 'tap_out_of_range')?.path).toBe('primary.turns');
     expect(r.response).toBeNull();
   });
-  it('bank_rating_low below 2 × peak (common practice, TRADE §2.11) and bank_rating_below_peak below the peak', () => {
+  it('bank_rating_low below 2 × peak (common practice) and bank_rating_below_peak below the peak', () => {
     const low = solve(si({ ...medium, tank: { unitCapacitance: '100 nF', unitVoltage: '2 kV', series: 12, parallel: 1 } }));
     expect(codes(low)).toContain('bank_rating_low');
     const below = solve(si({ ...medium, tank: { unitCapacitance: '100 nF', unitVoltage: '2 kV', series: 8, parallel: 1 } }));
@@ -166,7 +169,7 @@ describe('solve(design) warnings', () => {
     expect(w.message).toMatch(/can kill/);
     expect(w.message).toMatch(/bleeder/);
   });
-  it('tank_near_resonant within 15 % of the transformer-resonant capacitance (TRADE §2.10)', () => {
+  it('tank_near_resonant within 15 % of the transformer-resonant capacitance (C = I/(2π f V); common practice)', () => {
     const r = solve(si({ ...medium, tank: { capacitance: '6.8 nF' } }));
     expect(codes(r)).toContain('tank_near_resonant');
   });

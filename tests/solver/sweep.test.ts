@@ -36,7 +36,7 @@ describe('sweep(design, path, from, to, points)', () => {
     for (let i = 1; i < f.length; i++) expect(f[i]!).toBeLessThan(f[i - 1]!);
   });
 
-  it('loosens the coupling as the secondary is raised (TRADE §2.4)', () => {
+  it('loosens the coupling as the secondary is raised (Stefan’s tech notes, hotstreamer.deanostoybox.com; common practice)', () => {
     const k = sweep(d, 'secondary.elevation', 0.02, 0.3, 30, ['k']).series.k!;
     for (let i = 1; i < k.length; i++) expect(k[i]!).toBeLessThan(k[i - 1]!);
   });

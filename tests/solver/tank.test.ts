@@ -17,31 +17,31 @@ import {
 import { evaluateSupply, evaluateTank } from '../../src/solver/tank/evaluate';
 
 describe('resonantCapacitanceTransformer(V, I, f)', () => {
-  it('gives 13.3 nF for a 6 kV / 30 mA transformer at 60 Hz (Pete Lawrence, TCML 2003, TRADE §2.10)', () => {
+  it('gives 13.3 nF for a 6 kV / 30 mA transformer at 60 Hz (P. Lawrence, Tesla Coil Mailing List, June 2003)', () => {
     assertClose(resonantCapacitanceTransformer(6000, 0.03, 60), 13.3e-9, 0.005, '6 kV/30 mA');
   });
-  it('gives about 10.6 nF for 15 kV / 60 mA at 60 Hz (TRADE §2.10, same formula)', () => {
+  it('gives about 10.6 nF for 15 kV / 60 mA at 60 Hz (C = I/(2π f V), common practice)', () => {
     assertClose(resonantCapacitanceTransformer(15000, 0.06, 60), 10.6e-9, 0.005, '15 kV/60 mA');
   });
-  it('follows the rules nF ≈ 2.652 × mA/kV at 60 Hz and 3.183 × mA/kV at 50 Hz (TRADE §2.10)', () => {
+  it('follows the rules nF ≈ 2.652 × mA/kV at 60 Hz and 3.183 × mA/kV at 50 Hz (C = I/(2π f V), common practice)', () => {
     assertClose(resonantCapacitanceTransformer(12000, 0.03, 60), (2.652 * 30) / 12 * 1e-9, 1e-3, '60 Hz rule');
     assertClose(resonantCapacitanceTransformer(12000, 0.03, 50), (3.183 * 30) / 12 * 1e-9, 1e-3, '50 Hz rule');
   });
 });
 
 describe('ltrCapacitanceTransformer(V, I, f)', () => {
-  it('is π/2 ≈ 1.57 × the resonant value (1/(4fZ) against 1/(2πfZ); TRADE §2.10, bartmcguyer.com note 1)', () => {
+  it('is π/2 ≈ 1.57 × the resonant value (1/(4fZ) against 1/(2πfZ); B. McGuyer, "Note 1: LTR", bartmcguyer.com)', () => {
     const ratio = ltrCapacitanceTransformer(12000, 0.03, 60) / resonantCapacitanceTransformer(12000, 0.03, 60);
     assertClose(ratio, Math.PI / 2, 1e-12, 'LTR ratio');
     assertClose(ratio, 1.57, 0.001, 'LTR ratio, as quoted');
   });
-  it('equals 1/(240 Z) at 60 Hz (TRADE §2.10)', () => {
+  it('equals 1/(240 Z) at 60 Hz (B. McGuyer, "Note 1: LTR", bartmcguyer.com)', () => {
     assertClose(ltrCapacitanceTransformer(12000, 0.03, 60), 1 / (240 * transformerImpedance(12000, 0.03)), 1e-12, '1/(240 Z)');
   });
 });
 
 describe('bankCapacitance / bankVoltageRating', () => {
-  it('reproduce the hvtesla.com tray: 54 × 0.15 µF / 2000 V as 3 strings of 18 → 25 nF at 36 kV (TRADE §2.11)', () => {
+  it('reproduce the hvtesla.com tray: 54 × 0.15 µF / 2000 V as 3 strings of 18 → 25 nF at 36 kV (hvtesla.com/mmc.html)', () => {
     assertClose(bankCapacitance(0.15e-6, 18, 3), 25e-9, 1e-12, 'tray capacitance');
     assertClose(bankVoltageRating(2000, 18), 36000, 1e-12, 'tray rating');
   });
@@ -55,13 +55,13 @@ describe('capacitorEnergy(C, V) and powerAtBreakRate', () => {
     assertClose(capacitorEnergy(20e-9, peakVoltageRms(12000)), 0.5 * 20e-9 * 2 * 12000 ** 2, 1e-12, '½CV²');
     assertClose(capacitorEnergy(20e-9, peakVoltageRms(12000)), 2.88, 1e-12, '2.88 J');
   });
-  it('gives ½·BPS·C·V² (Burnett, TRADE §2.13): 2.88 J at 120 BPS → 345.6 W', () => {
+  it('gives ½·BPS·C·V² (R. Burnett, richieburnett.co.uk/rotary.html): 2.88 J at 120 BPS → 345.6 W', () => {
     assertClose(powerAtBreakRate(2.88, 120), 345.6, 1e-12, 'throughput');
   });
 });
 
 describe('sparkLengthFreau(P)', () => {
-  it('gives about 54 in at 1 kW (Freau, TCML 1998, TRADE §2.9)', () => {
+  it('gives about 54 in at 1 kW (J. Freau, Tesla Coil Mailing List, 1998; common practice, single source)', () => {
     assertClose(sparkLengthFreau(1000) / 0.0254, 54, 0.005, 'inches at 1 kW');
   });
   it('grows as the square root of power', () => {
@@ -70,7 +70,7 @@ describe('sparkLengthFreau(P)', () => {
 });
 
 describe('resistorPower / dischargeTimeConstant', () => {
-  it('give V²/R and RC (Ohm and Joule; 10 MΩ per unit is common practice, TRADE §2.11)', () => {
+  it('give V²/R and RC (Ohm and Joule; 10 MΩ per unit: T. Fritz, Tesla Coil Mailing List, February 2000; common practice)', () => {
     assertClose(resistorPower(1000, 10e6), 0.1, 1e-12, 'bleeder power');
     assertClose(dischargeTimeConstant(10e6, 0.1e-6), 1, 1e-12, 'RC');
   });

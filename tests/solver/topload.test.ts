@@ -11,6 +11,7 @@ import {
 } from '../../src/solver/topload/torus';
 import { assertClose } from '../helpers/assertClose';
 import library from '../../src/lib/validation/fixtures/physics-library.json';
+import worked from '../../src/lib/validation/fixtures/worked-examples.json';
 import legendre from './fixtures/toroidal-legendre.json';
 
 describe('capacitanceSphere', () => {
@@ -49,7 +50,7 @@ describe('capacitanceTorusIsolated', () => {
     assertClose(legendreQHalf(0, xi) / legendrePHalf(0, xi), Math.PI / 2, 1e-13, 'Q/P at 3');
   });
 
-  it('capacitanceTorusIsolated(R, r) gives 31.10706 pF and 25.80047 pF for the REFERENCES tori', () => {
+  it('capacitanceTorusIsolated(R, r) gives 31.10706 pF and 25.80047 pF for a 0.6 m torus read as centre-line and outside diameter (mpmath 1.3.0 toroidal-harmonic series)', () => {
     assertClose(capacitanceTorusIsolated(0.3, 0.075), 31.10706e-12, 2e-7, 'R = 0.3, r = 0.075');
     assertClose(capacitanceTorusIsolated(0.225, 0.075), 25.80047e-12, 2e-7, 'R = 0.225, r = 0.075');
   });
@@ -78,7 +79,7 @@ describe('capacitanceToroidEmpirical', () => {
 });
 
 describe('capacitanceAxisymmetricBEM', () => {
-  it('capacitanceAxisymmetricBEM(torus) matches the exact series within 0.01 % for both REFERENCES tori', () => {
+  it('capacitanceAxisymmetricBEM(torus) matches the exact series within 0.01 % for both 0.6 m tori (mpmath 1.3.0 toroidal-harmonic series)', () => {
     assertClose(capacitanceAxisymmetricBEM({ kind: 'torus', R: 0.3, r: 0.075, centreZ: 0 }), 31.10706e-12, 1e-4, 'R = 0.3');
     assertClose(capacitanceAxisymmetricBEM({ kind: 'torus', R: 0.225, r: 0.075, centreZ: 2 }), 25.80047e-12, 1e-4, 'R = 0.225');
     for (const { R, r, C } of library.torusSeries) {
@@ -97,10 +98,12 @@ describe('capacitanceAxisymmetricBEM', () => {
     assertClose(capacitanceAxisymmetricBEM({ kind: 'disk', radius: 0.1, centreZ: 0 }), 8 * EPSILON_0 * 0.1, 1e-6, 'disk a = 0.1');
   });
 
-  it('capacitanceAxisymmetricBEM(torus 1.0 m over ground) is 36.02267 pF (REFERENCES d)', () => {
+  it('capacitanceAxisymmetricBEM(torus 1.0 m over ground) is 36.02267 pF (charge simulation with scipy 1.17.1 / numpy, independent computation)', () => {
+    // scripts/fixtures/worked_examples.py: ring charges and ground images, a different discretisation
+    assertClose(worked.torusOverGround.C, 36.02267e-12, 1e-6, 'fixture value');
     assertClose(
       capacitanceAxisymmetricBEM({ kind: 'torus', R: 0.3, r: 0.075, centreZ: 1.0 }, { groundZ: 0 }),
-      36.02267e-12,
+      worked.torusOverGround.C,
       1e-4,
       'torus over ground',
     );

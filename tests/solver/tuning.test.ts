@@ -11,10 +11,10 @@ import {
 } from '../../src/solver';
 
 describe('streamerCapacitanceForLength(length)', () => {
-  it('allows 1 pF per foot (Fritz, TCML 2002, TRADE §2.8): 2.5 ft → 2.5 pF', () => {
+  it('allows 1 pF per foot (T. Fritz, Tesla Coil Mailing List, May 2002; common practice, single source): 2.5 ft → 2.5 pF', () => {
     assertClose(streamerCapacitanceForLength(2.5 * 0.3048), 2.5e-12, 1e-12, '2.5 ft');
   });
-  it('takes another figure per foot, e.g. the 0.8–2 pF/ft range (TRADE §2.8)', () => {
+  it('takes another figure per foot, e.g. the 0.8–2 pF/ft range (T. Fritz, Tesla Coil Mailing List, July 2005; Spark Discharge, CRC Press)', () => {
     assertClose(streamerCapacitanceForLength(0.3048, STREAMER_CAPACITANCE_PER_FOOT_RANGE.high), 2e-12, 1e-12, '2 pF/ft');
   });
 });
@@ -46,7 +46,7 @@ describe('solveTap(L(t), L_required, min, max)', () => {
   it('accepts the end points themselves', () => {
     expect(solveTap((t) => 1e-6 * t * t, 144e-6, 0.25, 12).tapTurns).toBe(12);
   });
-  it('tunes a real ring-model primary to a target within 1e-8 (fractional taps, REFERENCES §c3)', () => {
+  it('tunes a real ring-model primary to a target within 1e-8 (fractional taps, ring model)', () => {
     const p = { shape: 'flat' as const, innerDiameter: 0.2, turns: 12, conductorDiameter: 0.00635, spacing: 0.00635, elevation: 0 };
     const C = 20e-9;
     const target = 230e3;

@@ -31,7 +31,7 @@ describe('evaluateUncertainty(design, base)', () => {
     expect(full).toEqual(['selfCapacitance', 'inductance', 'toploadSurroundings', 'streamerAllowance', 'formDiameter']);
   });
 
-  it('spans the streamer allowance from 0.8 to 2 pF per foot (TRADE §2.8)', () => {
+  it('spans the streamer allowance from 0.8 to 2 pF per foot (T. Fritz, Tesla Coil Mailing List, 2005; Spark Discharge, CRC Press; common practice)', () => {
     const d = si(medium);
     const r = solve(d);
     const s = r.uncertainty!.loadedFrequency.contributions.find((x) => x.source === 'streamerAllowance')!;

@@ -9,7 +9,7 @@ import { assertClose } from '../helpers/assertClose';
 import skin from './fixtures/skin-effect.json';
 
 describe('awgDiameter', () => {
-  // ASTM B258 tabulated diameters (4 significant figures in inches), as listed in REFERENCES e.
+  // ASTM B258 tabulated diameters (4 significant figures in inches; B258-02 rounding rule, confirmed via a secondary source).
   const astm: Array<[number, number]> = [
     [30, 0.2546e-3],
     [22, 0.6438e-3],
@@ -68,7 +68,7 @@ describe('copperResistance', () => {
 });
 
 describe('skinDepth', () => {
-  it('skinDepth(f) for copper is 0.2090 mm at 100 kHz and 66.09 µm at 1 MHz (REFERENCES e)', () => {
+  it('skinDepth(f) for copper is 0.2090 mm at 100 kHz and 66.09 µm at 1 MHz (√(ρ/(π f μ0)), Ramo, Whinnery & Van Duzer 1994 §3.16, from memory; ρ per IEC 60028, from memory)', () => {
     assertClose(skinDepth(100e3), 0.209e-3, 5e-4, 'skinDepth(100 kHz)');
     assertClose(skinDepth(1e6), 66.09e-6, 2e-4, 'skinDepth(1 MHz)');
     assertClose(skinDepth(50e3), 0.2955e-3, 2e-4, 'skinDepth(50 kHz)');

@@ -6,7 +6,7 @@
  * Formulas are small trusted HTML fragments (sub/sup and Unicode), so the page needs no script.
  */
 
-/** How far a citation was checked: the marks used in the project's physics reference notes. */
+/** How far a citation was checked (its provenance mark), as explained at the top of /methods. */
 export type Mark =
   | 'confirmed'
   | 'confirmed numerically'
@@ -191,7 +191,7 @@ export const methodNotes: MethodNote[] = [
     ],
     range: 'Any toroid with outside diameter greater than twice the tube diameter, any sphere, clear of the ground plane.',
     accuracy:
-      'At the default panel count the boundary-element solution is within 10⁻⁴ of the exact torus series, the sphere’s image series and 8ε<sub>0</sub>a for a disk (a finer reference computation agreed with them to ≤ 1.4 × 10⁻⁸). Against a real room the uncertainty band allows ±5 % for surroundings (common practice). The empirical toroid formula is within about 7 % of the exact isolated torus for d/D = 0.1–0.35.',
+      'At the default panel count the boundary-element solution is within 10⁻⁴ of the exact torus series, the sphere’s image series and 8ε<sub>0</sub>a for a disk (an independent charge-simulation computation with scipy and numpy, scripts/fixtures/worked_examples.py, agrees with the torus series and the sphere’s image series to 10⁻¹⁴ and gives 36.02267 pF for a torus R = 0.3 m, r = 0.075 m, 1.0 m above ground). Against a real room the uncertainty band allows ±5 % for surroundings (common practice). The empirical toroid formula is within about 7 % of the exact isolated torus for d/D = 0.1–0.35.',
     references: [
       { text: 'W. R. Smythe, "Static and Dynamic Electricity", 3rd ed. (McGraw-Hill 1968), ch. 5: sphere above a plane, torus', mark: 'from memory' },
       { text: 'V. Belevitch & J. Boersma, "Some electrical problems for a torus", Philips J. Res. 38 (1983) 79–137', mark: 'from memory' },
@@ -199,7 +199,7 @@ export const methodNotes: MethodNote[] = [
       { text: 'NIST Digital Library of Mathematical Functions, §14.19 toroidal functions (14.19.4, 14.19.5) and §14.5(v)', mark: 'confirmed' },
       { text: 'J. C. Maxwell, "A Treatise on Electricity and Magnetism" (1873), vol. 1: potential of a ring of charge (checked here against the on-axis limit)', mark: 'from memory' },
       { text: 'J. D. Jackson, "Classical Electrodynamics", 3rd ed., §3.13: the disk 8ε<sub>0</sub>a', mark: 'from memory' },
-      { text: 'Axisymmetric boundary-element solution with a ground image, checked against all of the above', mark: 'confirmed numerically' },
+      { text: 'Axisymmetric boundary-element solution with a ground image, checked against all of the above and against a charge-simulation computation (ring charges with ground images; H. Singer, H. Steinbigler & P. Weiss, IEEE Trans. PAS-93, 1974) with scipy 1.17.1 and numpy (scripts/fixtures/worked_examples.py)', mark: 'confirmed numerically' },
       { text: 'Empirical toroid-topload formula circulating in the trade, without a primary physics source', mark: 'common practice' },
     ],
     notModelled: [
@@ -232,7 +232,7 @@ export const methodNotes: MethodNote[] = [
       { text: 'Loop formula after Kirchhoff; Maxwell, Treatise vol. 2; Rosa & Grover 1912; Grover 1946', mark: 'from memory' },
       { text: 'F. W. Grover, "Inductance Calculations" (1946): summation of coaxial-ring mutual inductances for coils', mark: 'from memory' },
       { text: 'H. A. Wheeler, "Simple inductance formulas for radio coils", Proc. IRE 16(10) (1928): the flat spiral', mark: 'from memory' },
-      { text: 'Ring-model worked examples (flat 52.38 µH HF, 30° cone 48.08 µH, helix 43.54 µH) and Maxwell’s M against Neumann’s integral to 10⁻¹⁵', mark: 'confirmed numerically' },
+      { text: 'Ring-model worked examples (flat 52.38 µH HF, 30° cone 48.08 µH, helix 43.54 µH) computed independently with scipy 1.17.1 quadrature of Neumann’s integral (scripts/fixtures/worked_examples.py); Maxwell’s M against the same quadrature to 10⁻¹¹ (scripts/fixtures/physics_library.py)', mark: 'confirmed numerically' },
     ],
     notModelled: ['Leads to the tank and the gap, and the tap clip', 'Current crowding between neighbouring primary turns', 'Tubing wall thickness (a solid round conductor is assumed)', 'Metal near the primary, including the strike rail'],
   },
@@ -251,7 +251,7 @@ export const methodNotes: MethodNote[] = [
     accuracy: 'Exact for rings against a uniform sheet (Maxwell’s M integrated numerically). The current along a resonating secondary is not uniform; the model does not follow that.',
     references: [
       { text: 'J. C. Maxwell, "A Treatise on Electricity and Magnetism" (1873), vol. 2, art. 701: mutual inductance of coaxial circles', mark: 'article number confirmed by a secondary source' },
-      { text: 'Filament-against-sheet integral checked against the double sum over filaments', mark: 'confirmed numerically' },
+      { text: 'Filament-against-sheet integral checked against nested mpmath 1.3.0 quadrature of Neumann’s integral (scripts/fixtures/physics_library.py)', mark: 'confirmed numerically' },
     ],
     notModelled: ['Non-uniform current along the secondary at resonance', 'Strike rail, metal nearby and off-axis placement', 'Frequency dependence of the primary’s current distribution'],
   },

@@ -2,7 +2,7 @@
  * Perimeter arithmetic for a public run of a coil. Pure: lengths in metres in, metres out.
  *
  * The margin is the practice of one professional performing troupe: a hard perimeter at least 10 ft
- * beyond the longest arc the coil can make (TRADE §4.2, makezine.com, "High voltage: put safety first
+ * beyond the longest arc the coil can make (Make: magazine, makezine.com, "High voltage: put safety first
  * during your Tesla coil performance"). It is a starting point; venue and insurer rules override it.
  */
 

@@ -24,6 +24,7 @@ import { awgDiameter } from '../../solver/wire/awg';
 import { copperMass } from '../../solver/wire/mass';
 import { copperResistance, skinDepth, skinEffectRatio } from '../../solver/wire/resistance';
 import lib from './fixtures/physics-library.json';
+import worked from './fixtures/worked-examples.json';
 import type { ReferenceCase } from './types';
 
 const LIB = `scipy ${lib.libraries.scipy}, mpmath ${lib.libraries.mpmath} (${lib.generator})`;
@@ -35,7 +36,14 @@ const MEDHURST =
   'R. G. Medhurst, "H.F. resistance and self-capacitance of single-layer solenoids", Wireless Engineer 24, 1947 — table of H (rows ℓ/D = 1–5 confirmed by a secondary transcription)';
 const ASTM = 'ASTM B258, "Standard nominal diameters … of AWG sizes of solid round wires", tabulated diameters (4 s.f.)';
 const IEC = 'IEC 60028 (1925), "International standard of resistance for copper" (from memory)';
-const WORKED_C3 = 'Coilwright REFERENCES §c3 worked examples (ring model by Maxwell/Kirchhoff summation, confirmed numerically)';
+const WORKED = `scipy ${worked.libraries.scipy}, mpmath ${worked.libraries.mpmath}, numpy ${worked.libraries.numpy} (${worked.generator})`;
+const RING_MODEL = `Ring model: Kirchhoff's loop formula for each turn plus Neumann's integral by scipy.integrate.quad for each pair (the Maxwell/Kirchhoff summation of F. W. Grover, "Inductance Calculations", 1946, from memory), independent computation — ${WORKED}`;
+const WHEELER_INCH = `the printed inch formula evaluated in inches, independent computation — ${WORKED}`;
+const ringPrimary = (shape: string) => {
+  const found = worked.ringPrimaries.find((p) => p.shape === shape);
+  if (!found) throw new Error(`worked-examples.json has no ${shape} primary`);
+  return found;
+};
 
 const primaryFlat: PrimaryGeometry = { shape: 'flat', innerDiameter: 0.2, turns: 12, conductorDiameter: 0.00635, spacing: 0.00635, elevation: 0 };
 const primaryInputs = { turns: 12, conductorDiameter: '6.35 mm', spacing: '6.35 mm', firstTurnRadius: '0.10 m' };
@@ -126,10 +134,10 @@ export const physicsCases: ReferenceCase[] = [
     id: 'rosa-corrected-helix',
     quantity: 'Secondary inductance (round wire, Rosa)',
     method: 'secondary-inductance',
-    source: 'Coilwright REFERENCES §a3 cross-check: 12-turn helix, Lorenz − μ0rN(A + B), low-frequency A (confirmed numerically against a ring-filament sum, 0.02 %)',
-    kind: 'worked-example',
+    source: `E. B. Rosa, "Calculation of the self-inductance of single-layer coils", Bull. Bur. Stand. 2(2), 1906 (from memory): Lorenz − μ0rN(A + B), low-frequency A; sheet by mpmath quadrature of Neumann's integral, B from its GMD definition by scipy.integrate.dblquad, independent computation — ${WORKED}`,
+    kind: 'library',
     inputs: { turns: 12, radius: '0.15 m', pitch: '12.7 mm', wireDiameter: '6.35 mm' },
-    reference: 44.11364,
+    reference: worked.rosaHelix.L * 1e6,
     unit: 'µH',
     tolerance: 1e-6,
     compute: () => (inductanceSolenoidLorenz(12, 0.15, 0.1524) - rosaCorrection(12, 0.15, 0.0127, 0.00635, false)) * 1e6,
@@ -138,10 +146,10 @@ export const physicsCases: ReferenceCase[] = [
     id: 'wheeler-1928-helix',
     quantity: 'Secondary inductance (Wheeler 1928)',
     method: 'secondary-inductance',
-    source: `H. A. Wheeler, "Simple inductance formulas for radio coils", Proc. IRE 16(10), 1928 (from memory); ${WORKED_C3}`,
-    kind: 'worked-example',
+    source: `H. A. Wheeler, "Simple inductance formulas for radio coils", Proc. IRE 16(10), 1928, a²n²/(9a + 10b) (from memory); ${WHEELER_INCH}`,
+    kind: 'closed-form',
     inputs: { turns: 12, radius: '0.15 m', length: '0.1524 m' },
-    reference: 44.38,
+    reference: worked.wheelerSolenoid.L * 1e6,
     unit: 'µH',
     tolerance: 2e-4,
     compute: () => inductanceSolenoidWheeler1928(12, 0.15, 0.1524) * 1e6,
@@ -204,7 +212,7 @@ export const physicsCases: ReferenceCase[] = [
     id: 'skin-depth-100k',
     quantity: 'Skin depth',
     method: 'wire',
-    source: 'δ = √(ρ/(π f μ0)) for annealed copper, Coilwright REFERENCES §e (0.2090 mm, confirmed numerically)',
+    source: `δ = √(ρ/(π f μ0)) (S. Ramo, J. R. Whinnery & T. Van Duzer, "Fields and Waves in Communication Electronics", 3rd ed., 1994, §3.16, from memory) with ρ = 1/58 Ω·mm²/m (${IEC}): 0.2090 mm`,
     kind: 'closed-form',
     inputs: { frequency: '100 kHz' },
     reference: 0.209,
@@ -216,7 +224,7 @@ export const physicsCases: ReferenceCase[] = [
     id: 'skin-depth-1M',
     quantity: 'Skin depth',
     method: 'wire',
-    source: 'δ = √(ρ/(π f μ0)) for annealed copper, Coilwright REFERENCES §e (66.09 µm, confirmed numerically)',
+    source: `δ = √(ρ/(π f μ0)) (S. Ramo, J. R. Whinnery & T. Van Duzer, "Fields and Waves in Communication Electronics", 3rd ed., 1994, §3.16, from memory) with ρ = 1/58 Ω·mm²/m (${IEC}): 66.09 µm`,
     kind: 'closed-form',
     inputs: { frequency: '1 MHz' },
     reference: 66.09,
@@ -266,10 +274,10 @@ export const physicsCases: ReferenceCase[] = [
     id: 'torus-over-ground-bem',
     quantity: 'Topload capacitance (toroid over ground)',
     method: 'topload-capacitance',
-    source: 'Coilwright REFERENCES §d: torus R = 0.3 m, r = 0.075 m, centre 1.0 m above ground, 36.02267 pF (independent BEM, confirmed numerically)',
-    kind: 'worked-example',
+    source: `Charge simulation with ring charges and ground images (H. Singer, H. Steinbigler & P. Weiss, "A charge simulation method for the calculation of high voltage fields", IEEE Trans. PAS-93, 1974, from memory), scipy.special.ellipk kernel and numpy least squares, independent computation — ${WORKED}`,
+    kind: 'library',
     inputs: { R: '0.3 m', r: '0.075 m', centreHeight: '1.0 m' },
-    reference: 36.02267,
+    reference: worked.torusOverGround.C * 1e12,
     unit: 'pF',
     tolerance: 1e-4,
     compute: () => capacitanceAxisymmetricBEM({ kind: 'torus', R: 0.3, r: 0.075, centreZ: 1 }, { groundZ: 0 }) * 1e12,
@@ -302,7 +310,7 @@ export const physicsCases: ReferenceCase[] = [
     id: 'topload-toroid-outside-diameter',
     quantity: 'Topload capacitance (toroid, outside-diameter convention)',
     method: 'topload-capacitance',
-    source: `Toroidal-harmonic series, mpmath legenp/legenq — ${LIB}; REFERENCES §d 25.80047 pF`,
+    source: `Toroidal-harmonic series (DLMF §14.19; W. R. Smythe, "Static and Dynamic Electricity", 3rd ed., 1968, from memory), mpmath legenp/legenq — ${LIB}`,
     kind: 'library',
     inputs: { majorDiameter: '0.6 m (outside)', minorDiameter: '0.15 m', ground: 'none' },
     reference: lib.torusSeries[1].C * 1e12,
@@ -314,10 +322,10 @@ export const physicsCases: ReferenceCase[] = [
     id: 'torus-series-0.3',
     quantity: 'Topload capacitance (isolated torus)',
     method: 'topload-capacitance',
-    source: 'Coilwright REFERENCES §d: toroidal-harmonic series, R = 0.3 m, r = 0.075 m, 31.10706 pF (confirmed numerically by BEM); W. R. Smythe 1968 (from memory)',
+    source: `Toroidal-harmonic series (DLMF §14.19; W. R. Smythe, "Static and Dynamic Electricity", 3rd ed., 1968, from memory), mpmath legenp/legenq — ${LIB}`,
     kind: 'library',
     inputs: { R: '0.3 m', r: '0.075 m' },
-    reference: 31.10706,
+    reference: lib.torusSeries[0].C * 1e12,
     unit: 'pF',
     tolerance: 2e-7,
     compute: () => capacitanceTorusIsolated(0.3, 0.075) * 1e12,
@@ -338,10 +346,10 @@ export const physicsCases: ReferenceCase[] = [
     id: 'toroid-empirical',
     quantity: 'Topload capacitance (trade toroid formula)',
     method: 'topload-capacitance',
-    source: 'Common practice: the trade\'s empirical toroid formula, compared with the exact isolated torus (REFERENCES §d, 31.10706 pF); loose check',
+    source: `Common practice: the trade's empirical toroid formula, compared with the exact isolated torus (toroidal-harmonic series, mpmath — ${LIB}); loose check`,
     kind: 'common-practice',
     inputs: { majorDiameter: '0.75 m (outside)', minorDiameter: '0.15 m' },
-    reference: 31.10706,
+    reference: lib.torusSeries[0].C * 1e12,
     unit: 'pF',
     tolerance: 0.1,
     compute: () => capacitanceToroidEmpirical(0.75, 0.15) * 1e12,
@@ -390,10 +398,10 @@ export const physicsCases: ReferenceCase[] = [
     id: 'primary-flat',
     quantity: 'Primary inductance (flat spiral)',
     method: 'primary-inductance',
-    source: WORKED_C3,
-    kind: 'worked-example',
+    source: RING_MODEL,
+    kind: 'library',
     inputs: primaryInputs,
-    reference: 52.38,
+    reference: ringPrimary('flat').Lhf * 1e6,
     unit: 'µH',
     tolerance: 1e-4,
     compute: () => inductancePrimary(primaryFlat) * 1e6,
@@ -402,10 +410,10 @@ export const physicsCases: ReferenceCase[] = [
     id: 'primary-cone-30',
     quantity: 'Primary inductance (30° cone)',
     method: 'primary-inductance',
-    source: WORKED_C3,
-    kind: 'worked-example',
+    source: RING_MODEL,
+    kind: 'library',
     inputs: { ...primaryInputs, angle: '30 deg' },
-    reference: 48.08,
+    reference: ringPrimary('conical30').Lhf * 1e6,
     unit: 'µH',
     tolerance: 1e-4,
     compute: () => inductancePrimary({ ...primaryFlat, shape: 'conical', angle: Math.PI / 6 }) * 1e6,
@@ -414,10 +422,10 @@ export const physicsCases: ReferenceCase[] = [
     id: 'primary-helix',
     quantity: 'Primary inductance (helix)',
     method: 'primary-inductance',
-    source: WORKED_C3,
-    kind: 'worked-example',
+    source: RING_MODEL,
+    kind: 'library',
     inputs: { ...primaryInputs, firstTurnRadius: '0.15 m' },
-    reference: 43.54,
+    reference: ringPrimary('helical').Lhf * 1e6,
     unit: 'µH',
     tolerance: 1e-4,
     compute: () => inductancePrimary({ ...primaryFlat, shape: 'helical', innerDiameter: 0.3 }) * 1e6,
@@ -426,10 +434,10 @@ export const physicsCases: ReferenceCase[] = [
     id: 'wheeler-flat-spiral',
     quantity: 'Primary inductance (Wheeler flat spiral)',
     method: 'primary-inductance',
-    source: `H. A. Wheeler, Proc. IRE 16(10), 1928, flat spiral a²N²/(8a + 11c) (from memory); ${WORKED_C3}`,
-    kind: 'worked-example',
+    source: `H. A. Wheeler, "Simple inductance formulas for radio coils", Proc. IRE 16(10), 1928, flat spiral a²N²/(8a + 11c) (from memory); ${WHEELER_INCH}`,
+    kind: 'closed-form',
     inputs: { meanRadius: '0.16985 m', turns: 12, radialWidth: '0.1524 m' },
-    reference: 53.89,
+    reference: worked.wheelerSpiral.L * 1e6,
     unit: 'µH',
     tolerance: 2e-4,
     compute: () => inductanceFlatSpiralWheeler(0.16985, 12, 0.1524) * 1e6,

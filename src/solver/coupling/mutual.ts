@@ -77,7 +77,8 @@ function integrateDistance(a: number, b: number, x0: number, x1: number): number
 /**
  * Mutual inductance between a primary (rings with optional weights) and a secondary current sheet, in H.
  *
- * Σᵢ wᵢ·{@link mutualInductanceRingSheet}: the double sum of REFERENCES c3 with the secondary's turns
+ * Σᵢ wᵢ·{@link mutualInductanceRingSheet}: the Maxwell/Kirchhoff double sum (F. W. Grover, Inductance
+ * Calculations, 1946, from memory) with the secondary's turns
  * as a continuous sheet. Rings come from primaryRings/primaryRingsAtTap; weight defaults to 1.
  * @example mutualPrimarySecondary([{ r: 0.2, z: 0 }], { radius: 0.05, z0: 0.01, length: 0.5, turns: 1000 }) // ≈ 8.687e-6
  */

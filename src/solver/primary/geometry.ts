@@ -1,7 +1,7 @@
 /** Shape of a primary winding: flat spiral, helix (solenoid) or cone. */
 export type PrimaryShape = 'flat' | 'helical' | 'conical';
 
-/** A primary winding in SI units (lengths in m, angle in rad), measured to the CONTRACT's datums. */
+/** A primary winding in SI units (lengths in m, angle in rad), measured to the datums of the public design format. */
 export type PrimaryGeometry = {
   shape: PrimaryShape;
   /** Centre-line diameter of the innermost turn. */
@@ -25,8 +25,8 @@ export type PrimaryRing = { r: number; z: number; weight: number };
  *
  * Ring i sits at r = r0 + i·pitch·cos α, z = elevation + i·pitch·sin α, with r0 = innerDiameter/2,
  * pitch = conductorDiameter + spacing measured along the winding's slant, α = 0 (flat), π/2 (helical)
- * or the cone angle (conical). This is the ring model of REFERENCES c3 (Maxwell/Kirchhoff summation as
- * used by Grover). A fractional last turn is a ring with weight equal to the fraction (see
+ * or the cone angle (conical). This is the ring model (Maxwell/Kirchhoff summation as used by F. W.
+ * Grover, Inductance Calculations, 1946, from memory). A fractional last turn is a ring with weight equal to the fraction (see
  * {@link primaryRingsAtTap}); the geometry stays discrete per whole turn.
  *
  * Domain: see {@link validatePrimary}. @example primaryRings({ shape: 'flat', innerDiameter: 0.2, turns: 2, conductorDiameter: 0.00635, spacing: 0.00635, elevation: 0 })

@@ -50,11 +50,12 @@ export function mutualInductanceLoops(a: number, b: number, d: number): number {
 /**
  * Inductance of a primary (flat, helical or conical) tapped `tapTurns` turns from its inner end, in H.
  *
- * Method: the ring model (REFERENCES c3): L = Σᵢ wᵢ² L_loop(rᵢ) + Σ_(i≠j) wᵢwⱼ M(rᵢ, rⱼ, |zᵢ − zⱼ|)
+ * Method: the ring model (Maxwell/Kirchhoff summation; F. W. Grover, Inductance Calculations, 1946, from memory): L = Σᵢ wᵢ² L_loop(rᵢ) + Σ_(i≠j) wᵢwⱼ M(rᵢ, rⱼ, |zᵢ − zⱼ|)
  * with rings and weights from {@link primaryRingsAtTap}, the high-frequency loop formula (skin depth at
  * the operating frequency ≪ conductor radius, true for copper tubing at tens of kHz and above) and
  * Maxwell's M. Assumes thin conductors (radius ≪ pitch is not required, radius ≪ r is). Reproduces
- * the ring-model worked examples of REFERENCES c3 (flat 52.38 µH, 30° cone 48.08 µH, helix 43.54 µH).
+ * the ring-model worked examples (flat 52.38 µH, 30° cone 48.08 µH, helix 43.54 µH) computed independently by
+ * scipy 1.17.1 quadrature of Neumann's integral (scripts/fixtures/worked_examples.py).
  *
  * Domain: a valid primary; 0 ≤ tapTurns ≤ turns (default all turns).
  * @example inductancePrimary({ shape: 'flat', innerDiameter: 0.2, turns: 12, conductorDiameter: 0.00635, spacing: 0.00635, elevation: 0 }) // ≈ 5.2376e-5
@@ -96,7 +97,7 @@ export function inductanceFlatSpiralWheeler(meanRadius: number, turns: number, r
  *
  * Flat: {@link inductanceFlatSpiralWheeler} with a = mean of the innermost and outermost ring radii and
  * c = turns × pitch. Helical: {@link inductanceSolenoidWheeler1928} with length = turns × pitch. These are
- * the inputs of the REFERENCES c3 worked examples (flat 53.89 µH, helix 44.38 µH).
+ * the inputs of the worked examples (flat 53.89 µH, helix 44.38 µH; scripts/fixtures/worked_examples.py).
  * @example inductancePrimaryWheeler({ shape: 'helical', innerDiameter: 0.3, turns: 12, conductorDiameter: 0.00635, spacing: 0.00635, elevation: 0 }) // ≈ 4.4384e-5
  */
 export function inductancePrimaryWheeler(p: PrimaryGeometry): number | null {

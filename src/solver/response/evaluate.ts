@@ -6,7 +6,8 @@ import { splitFrequencies, transferTime } from './modes';
 const MAX_HALF_CYCLES_INTEGRATED = 2000;
 
 /**
- * Split frequencies and transfer time of the tuned primary–secondary pair (REFERENCES §f), and the
+ * Split frequencies and transfer time of the tuned primary–secondary pair (f0/√(1±k); "Electronics"
+ * lecture notes §2.7, confirmed; P. Drude, Ann. Phys. 13, 1904, from memory), and the
  * first primary-energy minimum from integrating the lossless pair (it differs from the envelope null
  * by up to a quarter cycle).
  */

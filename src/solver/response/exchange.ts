@@ -36,7 +36,7 @@ export interface EnergyExchangeSeries {
  * Energy exchange in a lossless coupled pair, primary capacitor charged at t = 0, everything else at
  * rest. Integrates L·di/dt = −q/C (L the 2×2 inductance matrix) with classical fourth-order
  * Runge–Kutta. For a tuned pair the result matches the closed form q1 ∝ cos(ω_B t/2) cos(ω̄ t)
- * (REFERENCES §f); it also handles detuned pairs, which have no such simple form.
+ * ("Electronics" lecture notes §2.7, eqs. 2.99–2.123, confirmed); it also handles detuned pairs, which have no such simple form.
  * Domain: 0 ≤ k < 1, all L and C positive.
  */
 export function energyExchange(pair: CoupledPair, options: EnergyExchangeOptions = {}): EnergyExchangeSeries {

@@ -109,7 +109,9 @@ export function rosaCorrection(
  *
  * {@link inductanceSolenoidLorenz} minus {@link rosaCorrection} with pitch = length / turns and the
  * high-frequency A term (skin depth ≪ wire radius, as in a resonating secondary). The Rosa-corrected
- * sheet matches an explicit ring-filament sum to about 0.02 % for a 12-turn helix (REFERENCES a3).
+ * sheet matches an explicit ring-filament sum to about 0.02 % for a 12-turn helix (E. B. Rosa, Bull. Bur. Stand. 2(2), 1906, from
+ * memory; F. W. Grover, Inductance Calculations, 1946, from memory; the ring sum by scipy quadrature in
+ * scripts/fixtures/worked_examples.py).
  *
  * Domain: turns ≥ 1, radius > 0, length ≥ turns·bareDiameter.
  * @example inductanceSolenoidRoundWire(12, 0.15, 0.1524, 0.00635) // ≈ 4.3548e-5

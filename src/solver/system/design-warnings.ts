@@ -3,21 +3,23 @@ import type { DesignSI, Result, SolverWarning } from '../types';
 import { warning } from '../warnings';
 import { primaryParams, toploadOuterRadius } from './geometry';
 
-/** Typical winding length : diameter range, 2.5–5 : 1 (Rzeszotarski, TCML 1997; TRADE §2.1). */
+/** Typical winding length : diameter range, 2.5–5 : 1 (M. Rzeszotarski, Tesla Coil Mailing List, January 1997, pupman.com archive). */
 export const ASPECT_RATIO_TYPICAL = { low: 2.5, high: 5 } as const;
-/** Typical k for spark-gap coils, 0.05–0.2 (Stefan's tech notes, TRADE §2.4). */
+/** Typical k for spark-gap coils, 0.05–0.2 (Stefan's tech notes, hotstreamer.deanostoybox.com/stk/tc/TECH4.HTM). */
 export const COUPLING_SPARK_GAP_TYPICAL = { low: 0.05, high: 0.2 } as const;
-/** Upper k for solid-state (DRSSTC) coils, about 0.3 (from memory, TRADE §2.4). */
+/** Upper k for solid-state (DRSSTC) coils, about 0.3 (from memory; no primary source found). */
 export const COUPLING_SOLID_STATE_HIGH = 0.3;
-/** Total string DC rating of at least 2 × supply peak for transformer-fed tanks (common practice, TRADE §2.11). */
+/** Total string DC rating of at least 2 × supply peak for transformer-fed tanks (common practice; no primary source found). */
 export const BANK_RATING_FACTOR = 2;
-/** Capacitance within this fraction of the transformer-resonant value invites resonant rise (TRADE §2.10). */
+/** Capacitance within this fraction of the transformer-resonant value invites resonant rise
+ * (B. Hickman, Tesla Coil Mailing List, January 1999; P. Lawrence, Tesla Coil Mailing List, June 2003; common practice). */
 export const RESONANT_BAND = 0.15;
 /** Stored energy above which the large_stored_energy warning is raised. */
 export const STORED_ENERGY_WARNING = 1;
-/** Usual upper frequency for solid-state coils, 500 kHz (kaizerpowerelectronics DRSSTC guide, TRADE §2.2). */
+/** Usual upper frequency for solid-state coils, 500 kHz (DRSSTC design guide, kaizerpowerelectronics.dk, secondary-coil chapter). */
 export const SOLID_STATE_FREQUENCY_HIGH = 500e3;
-/** Pitch above this multiple of the insulated diameter counts as space-wound (TRADE §2.14, §3.2). */
+/** Pitch above this multiple of the insulated diameter counts as space-wound (common practice; close winding is
+ * the norm, M. Rzeszotarski, Tesla Coil Mailing List, January 1997). */
 export const SPACE_WOUND_FACTOR = 1.5;
 
 const fmt = (x: number, digits = 3) => Number(x.toPrecision(digits)).toString();
@@ -32,7 +34,7 @@ export function designWarnings(d: DesignSI, r: Result): SolverWarning[] {
         warning(
           'aspect_ratio_low',
           'secondary.windingLength',
-          `Winding length is ${fmt(sec.aspectRatio)} × the winding diameter; most coils use 2.5 to 5 (TRADE §2.1). ` +
+          `Winding length is ${fmt(sec.aspectRatio)} × the winding diameter; most coils use 2.5 to 5 (M. Rzeszotarski, Tesla Coil Mailing List, 1997). ` +
             'A short winding couples tightly and flashes over more easily.',
         ),
       );
@@ -41,7 +43,7 @@ export function designWarnings(d: DesignSI, r: Result): SolverWarning[] {
         warning(
           'aspect_ratio_high',
           'secondary.windingLength',
-          `Winding length is ${fmt(sec.aspectRatio)} × the winding diameter; most coils use 2.5 to 5 (TRADE §2.1). ` +
+          `Winding length is ${fmt(sec.aspectRatio)} × the winding diameter; most coils use 2.5 to 5 (M. Rzeszotarski, Tesla Coil Mailing List, 1997). ` +
             'Tall thin coils tend to perform poorly.',
         ),
       );
@@ -61,7 +63,7 @@ export function designWarnings(d: DesignSI, r: Result): SolverWarning[] {
           'space_wound',
           'secondary.windingLength',
           'The winding is space-wound; inductance and self-capacitance formulas are less accurate for spaced turns ' +
-            '(builders report inductance about 5 % low, TRADE §3.2).',
+            '(builders report inductance about 5 % low: Tesla Coil Mailing List, June 1999).',
         ),
       );
     }
@@ -74,7 +76,7 @@ export function designWarnings(d: DesignSI, r: Result): SolverWarning[] {
         'topload_smaller_than_form',
         t.shape === 'toroid' ? 'topload.majorDiameter' : 'topload.diameter',
         'The topload is narrower than the secondary winding; it adds little capacitance and does not shield the top turns. ' +
-          'Toroids are usually 2.5–5 × the secondary diameter (TRADE §2.7).',
+          'Toroids are usually 2.5–5 × the secondary diameter (hvtesla.com toroid notes; common practice).',
       ),
     );
   }
@@ -88,7 +90,7 @@ export function designWarnings(d: DesignSI, r: Result): SolverWarning[] {
           'primary_inside_form',
           'primary.innerDiameter',
           "The primary's inner turn lies inside the secondary's diameter (above or below the winding). " +
-            'Flashover and strikes to the primary are likely; builders leave about 1.5–2 in between them (TRADE §2.5).',
+            'Flashover and strikes to the primary are likely; builders leave about 1.5–2 in between them (D. C. Cox, Tesla Coil Mailing List, January 1998).',
         ),
       );
     }
@@ -103,7 +105,7 @@ export function designWarnings(d: DesignSI, r: Result): SolverWarning[] {
         warning(
           'coupling_high_for_spark_gap',
           'secondary.elevation',
-          `k = ${fmt(k)} is above the 0.05–0.2 usual for spark-gap coils (TRADE §2.4): expect racing sparks and flashover; raise the secondary.`,
+          `k = ${fmt(k)} is above the 0.05–0.2 usual for spark-gap coils (Stefan's tech notes, hotstreamer.deanostoybox.com): expect racing sparks and flashover; raise the secondary.`,
         ),
       );
     } else if (supply.kind === 'transformer' && k < COUPLING_SPARK_GAP_TYPICAL.low) {
@@ -111,7 +113,7 @@ export function designWarnings(d: DesignSI, r: Result): SolverWarning[] {
         warning(
           'coupling_low_for_spark_gap',
           'secondary.elevation',
-          `k = ${fmt(k)} is below the 0.05–0.2 usual for spark-gap coils (TRADE §2.4): energy transfers slowly and gap losses grow; lower the secondary.`,
+          `k = ${fmt(k)} is below the 0.05–0.2 usual for spark-gap coils (Stefan's tech notes, hotstreamer.deanostoybox.com): energy transfers slowly and gap losses grow; lower the secondary.`,
         ),
       );
     } else if (supply.kind === 'solid-state' && k > COUPLING_SOLID_STATE_HIGH) {
@@ -119,7 +121,7 @@ export function designWarnings(d: DesignSI, r: Result): SolverWarning[] {
         warning(
           'coupling_high_for_solid_state',
           'secondary.elevation',
-          `k = ${fmt(k)} is above the roughly 0.3 solid-state coils run at (from memory, TRADE §2.4): expect racing sparks; raise the secondary.`,
+          `k = ${fmt(k)} is above the roughly 0.3 solid-state coils run at (from memory): expect racing sparks; raise the secondary.`,
         ),
       );
     }
@@ -144,7 +146,7 @@ export function designWarnings(d: DesignSI, r: Result): SolverWarning[] {
           'bank_rating_low',
           ratingPath,
           `The tank's voltage rating (${fmt(tank.voltageRating / 1000)} kV) is below 2 × the supply peak ` +
-            `(${fmt((2 * peak) / 1000)} kV), the margin builders usually keep (common practice, TRADE §2.11).`,
+            `(${fmt((2 * peak) / 1000)} kV), the margin builders usually keep (common practice).`,
         ),
       );
     }
@@ -166,7 +168,7 @@ export function designWarnings(d: DesignSI, r: Result): SolverWarning[] {
         'tank_near_resonant',
         'tank',
         `The tank is ${fmt(sup.tankToResonantRatio, 2)} × the transformer-resonant capacitance. If the gap misses, resonant rise can ` +
-          'destroy the transformer; builders use about 1.5 × with static gaps (LTR, TRADE §2.10).',
+          'destroy the transformer; builders use about 1.5 × with static gaps (LTR; Tesla Coil Mailing List, June 2003; common practice).',
       ),
     );
   }
@@ -185,7 +187,7 @@ export function designWarnings(d: DesignSI, r: Result): SolverWarning[] {
         'frequency_high_for_solid_state',
         'secondary.turns',
         `The loaded frequency (${fmt(r.system.resonantFrequency / 1000)} kHz) is above the 35–500 kHz solid-state coils usually run at; ` +
-          'switching losses rise with frequency (TRADE §2.2).',
+          'switching losses rise with frequency (DRSSTC design guide, kaizerpowerelectronics.dk).',
       ),
     );
   }

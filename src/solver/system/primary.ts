@@ -4,7 +4,7 @@ import { couplingCoefficient, mutualPrimarySecondary } from '../coupling/mutual'
 import type { PrimarySI, SecondarySI } from '../types';
 import { primaryParams, secondarySheet } from './geometry';
 
-/** Inductance (ring model, REFERENCES §c3), conductor length and outside diameter of the whole primary. */
+/** Inductance (ring model: Maxwell/Kirchhoff summation, F. W. Grover, Inductance Calculations, 1946, from memory), conductor length and outside diameter of the whole primary. */
 export function evaluatePrimary(p: PrimarySI): { inductance: number; conductorLength: number; outerDiameter: number } {
   const params = primaryParams(p);
   return {
@@ -25,7 +25,8 @@ export function primaryConductorLengthAtTap(p: PrimarySI, tapTurns: number): num
 
 /**
  * Mutual inductance between the primary (all turns, or those up to a tap) and the secondary's current
- * sheet, and the coupling coefficient k = M/√(L1 L2) (REFERENCES §c3).
+ * sheet, and the coupling coefficient k = M/√(L1 L2) (mutual inductance of coaxial circles, J. C.
+ * Maxwell, A Treatise on Electricity and Magnetism, 1873, vol. 2, art. 701).
  */
 export function evaluateCoupling(
   p: PrimarySI,

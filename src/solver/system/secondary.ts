@@ -23,8 +23,9 @@ export interface SecondaryValues {
 
 /**
  * Geometry, inductance and self-capacitance of the secondary. Inductance: Lorenz current sheet at
- * the wire centres with Rosa's round-wire corrections (REFERENCES §a1, §a3); self-capacitance:
- * Medhurst 1947 (REFERENCES §b1). The wire is copper.
+ * the wire centres (L. Lorenz, Ann. Phys. Chem. 7, 1879; H. Nagaoka 1909; both from memory) with Rosa's
+ * round-wire corrections (E. B. Rosa, Bull. Bur. Stand. 2(2), 1906; F. W. Grover, Inductance Calculations,
+ * 1946; both from memory); self-capacitance: R. G. Medhurst, Wireless Engineer 24, 1947 (table). The wire is copper.
  */
 export function evaluateSecondary(s: SecondarySI): SecondaryValues {
   const D = windingDiameter(s);

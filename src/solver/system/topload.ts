@@ -3,7 +3,8 @@ import { capacitanceToroidEmpirical } from '../topload/torus';
 import type { DesignSI, ToploadSI } from '../types';
 import { toploadCentreHeight } from './geometry';
 
-/** Capacitance of the topload to the ground plane (BEM with a ground image, REFERENCES §d). */
+/** Capacitance of the topload to the ground plane (BEM with a ground image; checked against W. R. Smythe, Static and
+ * Dynamic Electricity, 3rd ed., 1968, from memory). */
 export function evaluateTopload(d: DesignSI, t: ToploadSI): { capacitance: number; centreHeightAboveGround: number; empirical: number | null } {
   const h = toploadCentreHeight(d, t);
   const capacitance =

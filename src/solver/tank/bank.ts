@@ -1,7 +1,7 @@
 /**
  * Capacitance of a series-parallel bank of equal capacitors (an MMC): `parallel` strings of `series`
  * units each. C = C_unit · parallel / series.
- * Source: TRADE §2.11 (hvtesla.com MMC notes); circuit theory for capacitors in series and parallel.
+ * Source: hvtesla.com/mmc.html MMC notes (common practice); circuit theory for capacitors in series and parallel.
  * Example: 150 nF units, 10 in series, 2 strings → 30 nF.
  */
 export function bankCapacitance(unitCapacitance: number, series: number, parallel: number): number {

@@ -1,6 +1,7 @@
 /**
  * Bleeder suggested across each capacitor of a bank: about 10 MΩ, ½ W per unit
- * (Terry Fritz, TCML 2000, TRADE §2.11; common practice). Bleeders can open: short each capacitor by
+ * (T. Fritz, Tesla Coil Mailing List, February 2000,
+ * pupman.com archive; common practice). Bleeders can open: short each capacitor by
  * hand before touching.
  */
 export const BLEEDER_RESISTANCE_PER_UNIT = 10e6;

@@ -8,7 +8,7 @@ export function capacitorEnergy(capacitance: number, voltage: number): number {
 
 /**
  * Power through a spark gap that fires `breakRate` times a second, each time dumping `energyPerBang`:
- * P = ½ · BPS · C · V² (Burnett, TRADE §2.13). Example: 2.88 J at 120 BPS → 346 W.
+ * P = ½ · BPS · C · V² (R. Burnett, "Rotary spark gaps", richieburnett.co.uk/rotary.html; common practice). Example: 2.88 J at 120 BPS → 346 W.
  */
 export function powerAtBreakRate(energyPerBang: number, breakRate: number): number {
   return energyPerBang * breakRate;

@@ -2,7 +2,7 @@ const METRES_PER_INCH = 0.0254;
 
 /**
  * Freau's rule of thumb for the spark length of a spark-gap coil: L[in] ≈ 1.7 · √(input watts).
- * Source: John Freau, TCML 1998 (TRADE §2.9), fitted to two of his coils; common practice and rough.
+ * Source: J. Freau, Tesla Coil Mailing List, 1998 (pupman.com archive; single source), fitted to two of his coils; common practice and rough.
  * It does not apply to solid-state coils. Returns metres. Example: 1000 W → 53.8 in = 1.366 m.
  */
 export function sparkLengthFreau(inputPower: number): number {
