@@ -159,9 +159,10 @@ test('save: a stale revision from a second tab is a conflict and neither edit is
 test('axe: the designer has no serious or critical accessibility violation', async ({ page }) => {
   await openDesigner(page, EXAMPLE);
   await page.getByRole('button', { name: 'Run sweep' }).click();
-  await expect(page.getByTestId('sweep-chart')).toBeVisible();
+  // The chart code and the unit parser load on first use; give a cold server room.
+  await expect(page.getByTestId('sweep-chart')).toBeVisible({ timeout: 30_000 });
   await page.getByRole('heading', { name: 'Energy exchange between primary and secondary' }).scrollIntoViewIfNeeded();
-  await expect(page.getByTestId('exchange-chart')).toBeVisible();
+  await expect(page.getByTestId('exchange-chart')).toBeVisible({ timeout: 30_000 });
   const results = await new AxeBuilder({ page }).analyze();
   const bad = results.violations.filter((v) => v.impact === 'serious' || v.impact === 'critical');
   expect(bad.map((v) => `${v.id}: ${v.nodes.map((n) => n.target.join(' ')).join(', ')}`)).toEqual([]);
