@@ -1,4 +1,4 @@
-import { and, desc, eq, isNull } from 'drizzle-orm';
+import { and, desc, eq, inArray, isNull } from 'drizzle-orm';
 import { randomBytes, randomUUID } from 'node:crypto';
 import { z } from 'zod';
 import type { Db } from '../db/client';
@@ -87,8 +87,19 @@ export async function listDesigns(db: Db, u: SessionUser) {
     ...memberRows.map((m) => ({ row: m.d, role: m.role })),
   ];
   all.sort((a, b) => b.row.updatedAt.getTime() - a.row.updatedAt.getTime());
+  // Each save stored its result summary with the revision; read it rather than solving every design again.
+  const saved = new Map<string, unknown>();
+  if (all.length) {
+    const revs = await db
+      .select({ designId: designRevisions.designId, revision: designRevisions.revision, summary: designRevisions.resultSummary })
+      .from(designRevisions)
+      .innerJoin(designs, and(eq(designRevisions.designId, designs.id), eq(designRevisions.revision, designs.revision)))
+      .where(inArray(designs.id, all.map((a) => a.row.id)));
+    for (const r of revs) saved.set(`${r.designId}:${r.revision}`, r.summary);
+  }
   return all.map(({ row, role }) => {
-    const summary = resultSummary(solveStored(row.design));
+    const stored = saved.get(`${row.id}:${row.revision}`) as ReturnType<typeof resultSummary> | undefined;
+    const summary = stored ?? resultSummary(solveStored(row.design));
     return {
       id: row.id,
       name: row.name,
