@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { referenceCases } from '~/lib/validation/cases';
-import { methodNoteFor, methodNotes } from '~/components/methods/methods';
+import { methodNoteFor, methodNotes } from '~/lib/content/methods';
 
 describe('methodNotes', () => {
   it('methodNoteFor(case.method) finds a note on /methods for every reference case', () => {
