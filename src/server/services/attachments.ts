@@ -98,6 +98,11 @@ async function readUpload(request: Request): Promise<File> {
 
 export async function listAttachments(db: Db, u: SessionUser | null, designId: string) {
   await authorize(db, designId, u, 'read');
+  return attachmentsOf(db, designId);
+}
+
+/** The photos and instrument files of a design already authorized, newest first. */
+export async function attachmentsOf(db: Db, designId: string) {
   const rows = await db.select().from(attachments).where(eq(attachments.designId, designId)).orderBy(desc(attachments.createdAt));
   return { attachments: rows.map(view) };
 }

@@ -6,8 +6,7 @@ import { designs, measurements } from '../db/schema';
 import type { SessionUser } from '../session';
 import { ApiError } from '../http';
 import { authorize, parseBody } from './designs';
-import { solveStored } from './solve';
-import { parseDesign } from '../../lib/design';
+import { solvedRow, solveStored, type SolvedDesign } from './solve';
 import { MEASUREMENT_KINDS, MEASUREMENT_KIND_IDS, predictionFor, relativeError, type MeasurementKind } from '../../lib/troubleshoot';
 import { calibratedTuning, calibrationSchema, mergeCalibration, readCalibration } from '../../lib/buildsheet';
 
@@ -97,8 +96,13 @@ export async function measurementRows(db: Db, designId: string): Promise<Row[]> 
 
 export async function listMeasurements(db: Db, u: SessionUser | null, designId: string) {
   const { row } = await authorize(db, designId, u, 'read');
-  const result = solveStored(row.design);
-  return { measurements: (await measurementRows(db, designId)).map((r) => view(r, result)) };
+  return measurementsOf(db, solvedRow(row));
+}
+
+/** The bench log of a design already authorized, with each reading beside the prediction of its solved result. */
+export async function measurementsOf(db: Db, d: SolvedDesign) {
+  const rows = await measurementRows(db, d.id);
+  return { measurements: rows.map((r) => view(r, d.result)) };
 }
 
 export async function createMeasurement(db: Db, u: SessionUser, designId: string, body: unknown) {
@@ -135,10 +139,10 @@ export const calibrationResponseSchema = z.object({
   calibrated: z.object({ targetFrequency: z.number(), tapTurns: z.number().nullable(), inRange: z.boolean() }).nullable(),
 });
 
-function calibrationView(design: unknown, raw: unknown) {
-  const calibration = readCalibration(raw);
-  const parsed = parseDesign(design);
-  const result = parsed.ok ? solveStored(design) : null;
+/** The stored calibration of a design already authorized, with the predicted and the calibrated tuning. */
+export function calibrationOf(d: Pick<SolvedDesign, 'parsed' | 'result' | 'calibration'>) {
+  const calibration = readCalibration(d.calibration);
+  const { parsed, result } = d;
   const cal = parsed.ok && result ? calibratedTuning(parsed.design, result, calibration) : null;
   return {
     calibration,
@@ -149,7 +153,7 @@ function calibrationView(design: unknown, raw: unknown) {
 
 export async function getCalibration(db: Db, u: SessionUser | null, designId: string) {
   const { row } = await authorize(db, designId, u, 'read');
-  return calibrationView(row.design, row.calibration);
+  return calibrationOf(solvedRow(row));
 }
 
 export async function putCalibration(db: Db, u: SessionUser, designId: string, body: unknown) {
@@ -157,5 +161,5 @@ export async function putCalibration(db: Db, u: SessionUser, designId: string, b
   const update = parseBody(calibrationSchema, body);
   const next = mergeCalibration(readCalibration(row.calibration), update);
   await db.update(designs).set({ calibration: next }).where(eq(designs.id, designId));
-  return calibrationView(row.design, next);
+  return calibrationOf(solvedRow({ ...row, calibration: next }));
 }

@@ -1,5 +1,5 @@
-import { parseDesign } from '../../lib/design';
-import { solve } from '../../solver';
+import { parseDesign, type DesignSI, type ParseDesignResult } from '../../lib/design';
+import { solve, type Result } from '../../solver';
 import { ApiError } from '../http';
 
 /** Validates a design input and solves it; bad input becomes the contract's validation error. */
@@ -22,4 +22,37 @@ export function solveStored(input: unknown) {
 
 export function prefixIssues(issues: Array<{ path: string; message: string }>, prefix: string) {
   return issues.map((i) => ({ path: prefix ? (i.path ? `${prefix}.${i.path}` : prefix) : i.path, message: i.message }));
+}
+
+/** A stored design, parsed once; `result` is solved on first read and then kept. */
+export type SolvedDesign = {
+  id: string;
+  /** The stored calibration column, as read. */
+  calibration: unknown;
+  parsed: ParseDesignResult;
+  readonly result: Result | null;
+};
+
+/** Parses a stored design row; the solver runs at most once, when `result` is first read. */
+export function solvedRow(row: { id: string; design: unknown; calibration: unknown }, solver: (d: DesignSI) => Result = solve): SolvedDesign {
+  const parsed = parseDesign(row.design);
+  let result: Result | null | undefined;
+  return {
+    id: row.id,
+    calibration: row.calibration,
+    parsed,
+    get result() {
+      if (result === undefined) result = parsed.ok ? solver(parsed.design) : null;
+      return result;
+    },
+  };
+}
+
+/** The parsed design and its result; a saved design that no longer parses is the validation error naming its fields. */
+export function requireSolved(d: SolvedDesign): { design: DesignSI; result: Result } {
+  const { parsed, result } = d;
+  if (!parsed.ok || !result) {
+    throw new ApiError('validation_failed', 'The saved design has invalid fields; fix it in the designer first.', parsed.ok ? [] : prefixIssues(parsed.issues, 'design'));
+  }
+  return { design: parsed.design, result };
 }

@@ -4,9 +4,7 @@ import type { SessionUser } from '../session';
 import { ApiError } from '../http';
 import { authorize } from './designs';
 import { measurementRows } from './measurements';
-import { prefixIssues } from './solve';
-import { parseDesign } from '../../lib/design';
-import { solve } from '../../solver';
+import { requireSolved, solvedRow, type SolvedDesign } from './solve';
 import { readCalibration } from '../../lib/buildsheet';
 import { QUESTIONS, SYMPTOMS, SYMPTOM_LABELS, benchValues, diagnose, type Answers, type QuestionId, type Symptom } from '../../lib/troubleshoot';
 
@@ -51,21 +49,25 @@ export const troubleshootResponseSchema = z.object({
 /** The guided check for one symptom (or all four), against the design, its bench log and the answers given. */
 export async function troubleshootDesign(db: Db, u: SessionUser | null, designId: string, q: TroubleshootQuery) {
   const { row } = await authorize(db, designId, u, 'read');
-  const parsed = parseDesign(row.design);
-  if (!parsed.ok) throw new ApiError('validation_failed', 'The saved design has invalid fields; fix it in the designer first.', prefixIssues(parsed.issues, 'design'));
+  return troubleshootOf(db, solvedRow(row), q);
+}
+
+/** The guided check of a design already authorized, from its solved result. */
+export async function troubleshootOf(db: Db, d: SolvedDesign, q: TroubleshootQuery) {
+  const { design, result } = requireSolved(d);
   const answers: Answers = {};
   for (const id of Object.keys(QUESTIONS) as QuestionId[]) {
     const a = q[id];
     if (a === 'yes') answers[id] = true;
     else if (a === 'no') answers[id] = false;
   }
-  const rows = await measurementRows(db, designId);
+  const rows = await measurementRows(db, d.id);
   const ctx = {
-    design: parsed.design,
-    result: solve(parsed.design),
+    design,
+    result,
     bench: benchValues(rows.map((r) => ({ kind: r.kind, value: r.value, measuredAt: r.measuredAt }))),
     answers,
-    calibration: readCalibration(row.calibration),
+    calibration: readCalibration(d.calibration),
   };
   const list: Symptom[] = q.symptom ? [q.symptom] : [...SYMPTOMS];
   return {
