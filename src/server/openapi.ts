@@ -18,7 +18,7 @@ import {
   updateDesignBodySchema,
   updateMeBodySchema,
 } from '../lib/api/contracts';
-import { json, type ResponseDoc, type RouteDoc } from './openapi-types';
+import { json, media, type ResponseDoc, type RouteDoc } from './openapi-types';
 import { libraryRoutes } from './openapi-routes-library';
 import { workbenchRoutes } from './openapi-routes-workbench';
 
@@ -36,6 +36,7 @@ const coreRoutes: RouteDoc[] = [
   { method: 'delete', path: '/api/v1/designs/{id}/share/{token}', summary: 'Revoke a share link (owner).', responses: { 204: 'Revoked.', 404: 'No such link.' } },
   { method: 'get', path: '/api/v1/shared/{token}', summary: 'A shared design, without sign-in.', auth: false, responses: { 200: json(sharedDesignSchema, 'The shared design with its result.'), 404: 'Unknown or revoked token.' } },
   { method: 'get', path: '/api/v1/me', summary: 'The signed-in user.', responses: { 200: json(meResponseSchema, 'The signed-in user.'), 401: 'Not signed in.' } },
+  { method: 'get', path: '/api/v1/openapi.json', summary: 'This document, generated from the contract schemas.', auth: false, responses: { 200: media('application/json', 'The OpenAPI 3.1 document.') } },
   { method: 'patch', path: '/api/v1/me', summary: 'Change my name or unit preference.', body: updateMeBodySchema, responses: { 200: json(meResponseSchema, 'The user as stored now.'), 400: 'Invalid field.', 401: 'Not signed in.' } },
 ];
 
