@@ -11,6 +11,7 @@ import globals from 'globals';
 /** Packages the solver may import: pure math only. */
 const SOLVER_PACKAGES = ['@stdlib/', 'ml-matrix'];
 
+/** @param {string} target a folder of code that also runs in the browser */
 const serverZone = (target) => ({
   target,
   from: './src/server',

@@ -2,16 +2,16 @@ import type { AstroGlobal } from 'astro';
 import type { Result } from '../solver';
 import type { DesignSI } from '../lib/design';
 import { designCan, type DesignRole } from '../lib/permissions';
-import { getDb, type Db } from './db';
 import { requirePageUser } from './guard';
 import { ApiError } from './http';
 import type { SessionUser } from './session';
-import { authorize, getRevision, listRevisions } from './services/designs';
-import { compareRevisions } from './services/revisions';
+import { authorize, type DesignRow } from './services/access';
+import { compareOf, revisionOf, revisionsOf } from './services/revisions';
 import { solvedRow, type SolvedDesign } from './services/solve';
 import { calibrationOf, measurementsOf } from './services/measurements';
 import { attachmentsOf } from './services/attachments';
-import { troubleshootOf, type TroubleshootQuery } from './services/troubleshoot';
+import { troubleshootOf } from './services/troubleshoot';
+import type { TroubleshootQuery } from '../lib/api/contracts';
 import { buildSheetOf } from './services/build-sheet';
 import type { BuildSheetQuery } from '../lib/buildsheet';
 
@@ -28,7 +28,7 @@ export type DesignPage = {
   canWrite: boolean;
   updatedAt: string;
   /** The design as stored: the user's input, units and all. */
-  input: unknown;
+  input: DesignRow['design'];
   /** The stored design parsed, and its result solved on first read. */
   solved: SolvedDesign;
   /** Shorthand for `solved.result`: null when the stored design no longer parses. */
@@ -40,16 +40,14 @@ export type DesignPage = {
   attachments(): ReturnType<typeof attachmentsOf>;
   troubleshoot(query: TroubleshootQuery): ReturnType<typeof troubleshootOf>;
   buildSheet(query: BuildSheetQuery): ReturnType<typeof buildSheetOf>;
-  revisions(): ReturnType<typeof listRevisions>;
+  revisions(): ReturnType<typeof revisionsOf>;
   /** One saved revision, or null when there is no such revision. */
-  readRevision(n: number): Promise<Awaited<ReturnType<typeof getRevision>> | null>;
+  readRevision(n: number): Promise<Awaited<ReturnType<typeof revisionOf>> | null>;
   /** Two revisions compared, or null when either does not exist. */
-  compare(from: number, to: number): Promise<Awaited<ReturnType<typeof compareRevisions>> | null>;
+  compare(from: number, to: number): Promise<Awaited<ReturnType<typeof compareOf>> | null>;
 };
 
 export type DesignPageOptions = {
-  /** The database; the app's own unless a test brings one. */
-  db?: Db;
   /** The solver to run; the real one unless a test counts its calls. */
   solver?: (design: DesignSI) => Result;
 };
@@ -68,8 +66,8 @@ async function orNull<T>(load: () => Promise<T>): Promise<T | null> {
  * Authorizes `user` to read design `id` and prepares it for a page; null when the design does not exist or the
  * user has no role on it (the two look the same, so a stranger learns nothing).
  */
-export async function openDesignPage(db: Db, user: SessionUser, id: string, options: DesignPageOptions = {}): Promise<DesignPage | null> {
-  const found = await orNull(() => authorize(db, id, user, 'read'));
+export async function openDesignPage(user: SessionUser, id: string, options: DesignPageOptions = {}): Promise<DesignPage | null> {
+  const found = await orNull(() => authorize(id, user, 'read'));
   if (!found) return null;
   const { row, role } = found;
   const solved = solvedRow(row, options.solver);
@@ -88,15 +86,15 @@ export async function openDesignPage(db: Db, user: SessionUser, id: string, opti
     get si() {
       return solved.parsed.ok ? solved.parsed.design : null;
     },
-    measurements: () => measurementsOf(db, solved),
+    measurements: () => measurementsOf(solved),
     calibration: () => calibrationOf(solved),
-    attachments: () => attachmentsOf(db, row.id),
-    troubleshoot: (query) => troubleshootOf(db, solved, query),
+    attachments: () => attachmentsOf(row.id),
+    troubleshoot: (query) => troubleshootOf(solved, query),
     buildSheet: (query) => buildSheetOf({ ...base, solved }, query),
-    revisions: () => listRevisions(db, user, row.id),
-    readRevision: (n) => (Number.isInteger(n) && n >= 1 ? orNull(() => getRevision(db, user, row.id, n)) : Promise.resolve(null)),
+    revisions: () => revisionsOf(row.id),
+    readRevision: (n) => (Number.isInteger(n) && n >= 1 ? orNull(() => revisionOf(row.id, n)) : Promise.resolve(null)),
     compare: (from, to) =>
-      Number.isInteger(from) && Number.isInteger(to) && from >= 1 && to >= 1 ? orNull(() => compareRevisions(db, user, row.id, from, to)) : Promise.resolve(null),
+      Number.isInteger(from) && Number.isInteger(to) && from >= 1 && to >= 1 ? orNull(() => compareOf(row.id, from, to)) : Promise.resolve(null),
   };
 }
 
@@ -112,7 +110,7 @@ export async function loadDesignPage(Astro: AstroGlobal, options: DesignPageOpti
   if (user instanceof Response) return user;
   let load = loaded.get(Astro.request);
   if (!load) {
-    load = openDesignPage(options.db ?? getDb(), user, Astro.params.id ?? '', options);
+    load = openDesignPage(user, Astro.params.id ?? '', options);
     loaded.set(Astro.request, load);
   }
   const page = await load;

@@ -1,6 +1,5 @@
-import { getDb } from './db';
 import { ApiError } from './http';
-import { getShared } from './services/designs';
+import { getShared } from './services/shares';
 import { describeInvitation } from './services/invitations';
 
 /** A link that leads nowhere (unknown, revoked, expired or malformed token) becomes null, for the page to say so. */
@@ -15,10 +14,10 @@ async function orNull<T>(load: () => Promise<T>): Promise<T | null> {
 
 /** The design behind a read-only share link, for /s/[token]. */
 export function loadSharedDesign(token: string) {
-  return orNull(() => getShared(getDb(), token));
+  return orNull(() => getShared(token));
 }
 
 /** The invitation behind an invitation link, for /invitations/[token]. */
 export function loadInvitation(token: string) {
-  return orNull(() => describeInvitation(getDb(), token));
+  return orNull(() => describeInvitation(token));
 }

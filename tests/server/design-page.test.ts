@@ -4,11 +4,13 @@ import { openDb, prepareDb, type Db } from '../../src/server/db/client';
 import { user } from '../../src/server/db/schema';
 import type { SessionUser } from '../../src/server/session';
 import { loadDesignPage, openDesignPage } from '../../src/server/design-page';
+import { withDatabase } from '../../src/server/services/database';
 import { createDesign } from '../../src/server/services/designs';
 import { createMeasurement, getCalibration, listMeasurements } from '../../src/server/services/measurements';
 import { listAttachments } from '../../src/server/services/attachments';
 import { parseTroubleshootQuery, troubleshootDesign } from '../../src/server/services/troubleshoot';
 import { getBuildSheet, parseBuildSheetQuery } from '../../src/server/services/build-sheet';
+import { compareRevisions, getRevision, listRevisions } from '../../src/server/services/revisions';
 import { solve, type DesignSI, type Result } from '../../src/solver';
 
 const coil = {
@@ -48,12 +50,17 @@ let designId: string;
 const troubleQuery = parseTroubleshootQuery(new URL('http://coilwright.test/?symptom=short-sparks&rfGround=yes'));
 const sheetQuery = parseBuildSheetQuery(new URL('http://coilwright.test/?rpm=60'));
 
+/** Runs a test body with the services on this file's own database. */
+const inDb = (fn: () => Promise<void>) => () => withDatabase(db, fn);
+
 beforeAll(async () => {
   db = openDb(':memory:');
   await prepareDb(db, ':memory:');
   await db.insert(user).values([owner, stranger].map((u) => ({ id: u.id, name: u.name, email: u.email })));
-  designId = (await createDesign(db, owner, { name: 'Workshop coil', design: coil })).id;
-  await createMeasurement(db, owner, designId, { kind: 'loaded-frequency', value: 190000, measuredAt: '2026-03-14' });
+  await withDatabase(db, async () => {
+    designId = (await createDesign(owner, { name: 'Workshop coil', design: coil })).id;
+    await createMeasurement(owner, designId, { kind: 'loaded-frequency', value: 190000, measuredAt: '2026-03-14' });
+  });
 });
 
 afterAll(() => {
@@ -61,10 +68,10 @@ afterAll(() => {
 });
 
 describe('openDesignPage', () => {
-  it('authorizes and solves the design once for everything the bench page reads, with the same answers as the services', async () => {
+  it('authorizes and solves the design once for everything the bench page reads, with the same answers as the services', inDb(async () => {
     const count = countingSolver();
     const lookups = countDesignLookups();
-    const page = await openDesignPage(db, owner, designId, { solver: count.solver });
+    const page = await openDesignPage(owner, designId, { solver: count.solver });
     expect(page).not.toBeNull();
     expect(page!.name).toBe('Workshop coil');
     expect(page!.role).toBe('owner');
@@ -79,38 +86,48 @@ describe('openDesignPage', () => {
     expect(lookups.stop()).toBe(1);
 
     // what each page part shows is what the authorizing service answers on its own
-    expect(measurements).toEqual(await listMeasurements(db, owner, designId));
+    expect(measurements).toEqual(await listMeasurements(owner, designId));
     expect(measurements.measurements[0].predicted).toBe(page!.result?.system?.resonantFrequency);
-    expect(calibration).toEqual(await getCalibration(db, owner, designId));
-    expect(attachments).toEqual(await listAttachments(db, owner, designId));
-    expect(trouble).toEqual(await troubleshootDesign(db, owner, designId, troubleQuery));
-    expect(sheet).toEqual(await getBuildSheet(db, owner, designId, sheetQuery));
+    expect(calibration).toEqual(await getCalibration(owner, designId));
+    expect(attachments).toEqual(await listAttachments(owner, designId));
+    expect(trouble).toEqual(await troubleshootDesign(owner, designId, troubleQuery));
+    expect(sheet).toEqual(await getBuildSheet(owner, designId, sheetQuery));
     expect(count.calls).toBe(1);
-  });
+  }));
 
-  it('does not solve at all for a page that shows no result', async () => {
+  it('does not solve at all for a page that shows no result', inDb(async () => {
     const count = countingSolver();
-    const page = await openDesignPage(db, owner, designId, { solver: count.solver });
+    const page = await openDesignPage(owner, designId, { solver: count.solver });
     expect(page?.revision).toBe(1);
     expect(await page!.revisions()).toHaveLength(1);
     expect(count.calls).toBe(0);
-  });
+  }));
 
-  it('is null for a stranger and for a design that does not exist, without solving', async () => {
+  it('is null for a stranger and for a design that does not exist, without solving', inDb(async () => {
     const count = countingSolver();
-    expect(await openDesignPage(db, stranger, designId, { solver: count.solver })).toBeNull();
-    expect(await openDesignPage(db, owner, 'no-such-design', { solver: count.solver })).toBeNull();
+    expect(await openDesignPage(stranger, designId, { solver: count.solver })).toBeNull();
+    expect(await openDesignPage(owner, 'no-such-design', { solver: count.solver })).toBeNull();
     expect(count.calls).toBe(0);
-  });
+  }));
 
-  it('answers null for a revision or comparison that does not exist', async () => {
-    const page = await openDesignPage(db, owner, designId);
+  it('reads history, revisions and comparisons under its one access check, with the services\' answers', inDb(async () => {
+    const lookups = countDesignLookups();
+    const page = await openDesignPage(owner, designId);
+    const [history, revision, comparison] = await Promise.all([page!.revisions(), page!.readRevision(1), page!.compare(1, 1)]);
+    expect(lookups.stop()).toBe(1);
+    expect(history).toEqual(await listRevisions(owner, designId));
+    expect(revision).toEqual(await getRevision(owner, designId, 1));
+    expect(comparison).toEqual(await compareRevisions(owner, designId, 1, 1));
+  }));
+
+  it('answers null for a revision or comparison that does not exist', inDb(async () => {
+    const page = await openDesignPage(owner, designId);
     expect((await page!.readRevision(1))?.name).toBe('Workshop coil');
     expect(await page!.readRevision(2)).toBeNull();
     expect(await page!.readRevision(Number('x'))).toBeNull();
     expect(await page!.compare(1, 2)).toBeNull();
     expect((await page!.compare(1, 1))?.nameChanged).toBe(false);
-  });
+  }));
 });
 
 /** Enough of Astro's page global for the loader: the request, its URL and params, the signed-in user. */
@@ -128,11 +145,11 @@ function astroFor(path: string, who: SessionUser | null, request = new Request(`
 }
 
 describe('loadDesignPage', () => {
-  it('loads and solves once per request, however often the page and its layout ask', async () => {
+  it('loads and solves once per request, however often the page and its layout ask', inDb(async () => {
     const count = countingSolver();
     const { astro } = astroFor(`/designs/${designId}/bench`, owner);
-    const first = await loadDesignPage(astro, { db, solver: count.solver });
-    const again = await loadDesignPage(astro, { db, solver: count.solver });
+    const first = await loadDesignPage(astro, { solver: count.solver });
+    const again = await loadDesignPage(astro, { solver: count.solver });
     expect(again).toBe(first);
     if (first instanceof Response) throw new Error('expected the design');
     void first.result;
@@ -141,25 +158,25 @@ describe('loadDesignPage', () => {
     expect(count.calls).toBe(1);
 
     // the next request loads afresh
-    const next = await loadDesignPage(astroFor(`/designs/${designId}/bench`, owner).astro, { db, solver: count.solver });
+    const next = await loadDesignPage(astroFor(`/designs/${designId}/bench`, owner).astro, { solver: count.solver });
     expect(next).not.toBe(first);
     void (next as typeof first).result;
     expect(count.calls).toBe(2);
-  });
+  }));
 
-  it('sends a visitor who is not signed in to sign in, and comes back to the same page', async () => {
-    const r = await loadDesignPage(astroFor(`/designs/${designId}/event?spark=1.2`, null).astro, { db });
+  it('sends a visitor who is not signed in to sign in, and comes back to the same page', inDb(async () => {
+    const r = await loadDesignPage(astroFor(`/designs/${designId}/event?spark=1.2`, null).astro);
     expect(r).toBeInstanceOf(Response);
     expect((r as Response).status).toBe(302);
     expect((r as Response).headers.get('location')).toBe(`/sign-in?next=${encodeURIComponent(`/designs/${designId}/event?spark=1.2`)}`);
-  });
+  }));
 
-  it('answers the 404 page for a stranger and for a missing design', async () => {
+  it('answers the 404 page for a stranger and for a missing design', inDb(async () => {
     for (const [path, who] of [[`/designs/${designId}/history`, stranger], ['/designs/no-such-design/history', owner]] as const) {
       const { astro, rewrites } = astroFor(path, who);
-      const r = await loadDesignPage(astro, { db });
+      const r = await loadDesignPage(astro);
       expect((r as Response).status).toBe(404);
       expect(rewrites).toEqual(['/404']);
     }
-  });
+  }));
 });

@@ -1,32 +1,18 @@
-import type { Db } from '../db/client';
 import type { SessionUser } from '../session';
-import { ApiError } from '../http';
-import { authorize } from './designs';
+import { ApiError, parseQuery } from '../http';
+import { authorize } from './access';
 import { requireSolved, solvedRow, type SolvedDesign } from './solve';
 import type { DesignRole } from '../../lib/permissions';
 import { buildSheet, buildSheetQuerySchema, MAX_CHECKPOINTS, readCalibration, sheetSections, type BuildSheetQuery } from '../../lib/buildsheet';
 
 /** Reads rpm, margin and every from a URL's query; a bad one is a 400 naming it. */
 export function parseBuildSheetQuery(url: URL): BuildSheetQuery {
-  const raw: Record<string, string> = {};
-  for (const key of ['rpm', 'margin', 'every'] as const) {
-    const v = url.searchParams.get(key);
-    if (v !== null && v !== '') raw[key] = v;
-  }
-  const r = buildSheetQuerySchema.safeParse(raw);
-  if (!r.success) {
-    throw new ApiError(
-      'validation_failed',
-      'Some parameters need attention.',
-      r.error.issues.map((i) => ({ path: i.path.join('.'), message: i.message })),
-    );
-  }
-  return r.data;
+  return parseQuery(url, buildSheetQuerySchema);
 }
 
 /** The build sheet of a design the user may read: numbers, display sections and the design's name. */
-export async function getBuildSheet(db: Db, u: SessionUser | null, designId: string, query: BuildSheetQuery) {
-  const { row, role } = await authorize(db, designId, u, 'read');
+export async function getBuildSheet(u: SessionUser | null, designId: string, query: BuildSheetQuery) {
+  const { row, role } = await authorize(designId, u, 'read');
   return buildSheetOf({ ...row, role, solved: solvedRow(row) }, query);
 }
 
