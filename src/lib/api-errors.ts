@@ -1,7 +1,7 @@
 import { errorMessages } from './errors';
 
 /** The stable error codes of the /api/v1 endpoints; their words come from the one map in errors.ts. */
-const codes = [
+export const apiErrorCodes = [
   'validation_failed',
   'invalid_json',
   'unauthorized',
@@ -15,9 +15,9 @@ const codes = [
   'internal_error',
 ] as const;
 
-export type ApiErrorCode = (typeof codes)[number];
+export type ApiErrorCode = (typeof apiErrorCodes)[number];
 
-export const apiErrors = Object.fromEntries(codes.map((c) => [c, errorMessages[c]])) as Record<ApiErrorCode, string>;
+export const apiErrors = Object.fromEntries(apiErrorCodes.map((c) => [c, errorMessages[c]])) as Record<ApiErrorCode, string>;
 
 export type ApiIssue = { path: string; message: string };
 
