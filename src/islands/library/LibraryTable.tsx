@@ -17,7 +17,7 @@ import { Dialog } from './Dialog';
 import { ApiFailure, failureMessage } from '~/lib/api/client';
 import { withApi } from '~/lib/api/provider';
 import { useDeleteDesign, useDesignList, useDuplicateDesign, useImportDesign, useRenameDesign, type LibraryRow } from '~/lib/api/queries/designs';
-import type { DesignRole } from '~/lib/api/types';
+import type { DesignRole } from '~/lib/permissions';
 
 type Props = { pageSize?: number };
 

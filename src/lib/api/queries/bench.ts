@@ -1,41 +1,22 @@
 /** The bench: measurements of a built coil, the calibration adopted from them, photos and instrument files. */
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api, designPath } from '../client';
+import type {
+  Attachment,
+  AttachmentListResponse,
+  CalibrationBody,
+  CalibrationResponse,
+  Measurement,
+  MeasurementBody,
+  MeasurementListResponse,
+  UploadedAttachment,
+} from '../contracts';
 import { keys } from './keys';
 
-export type MeasurementRow = {
-  id: string;
-  kind: string;
-  label: string;
-  value: number;
-  unit: string;
-  measuredAt: string;
-  instrument: string | null;
-  notes: string | null;
-  predicted: number | null;
-  errorPercent: number | null;
-};
-
-export type CalibrationValues = { loadedFrequency?: number; tankCapacitance?: number; coupling?: number };
-
-export type CalibrationView = {
-  calibration: CalibrationValues;
-  predicted: { loadedFrequency: number | null; tapTurns: number | null };
-  calibrated: { targetFrequency: number; tapTurns: number | null; inRange: boolean } | null;
-};
-
-export type NewMeasurement = { kind: string; value: number; measuredAt: string; instrument?: string; notes?: string };
-
-export type AttachmentItem = {
-  id: string;
-  fileName: string;
-  contentType: string;
-  size: number;
-  kind: 'photo' | 'instrument';
-  url: string;
-  thumbnailUrl: string | null;
-  createdAt: string;
-};
+export type MeasurementRow = Measurement;
+export type CalibrationView = CalibrationResponse;
+export type NewMeasurement = MeasurementBody;
+export type AttachmentItem = Attachment;
 
 const byDate = (rows: MeasurementRow[]) => [...rows].sort((a, b) => a.measuredAt.localeCompare(b.measuredAt));
 
@@ -43,7 +24,7 @@ const byDate = (rows: MeasurementRow[]) => [...rows].sort((a, b) => a.measuredAt
 export function useMeasurements(designId: string, initial?: MeasurementRow[]) {
   return useQuery({
     queryKey: keys.measurements(designId),
-    queryFn: () => api.get<{ measurements: MeasurementRow[] }>(designPath(designId, '/measurements')).then((r) => byDate(r.measurements)),
+    queryFn: () => api.get<MeasurementListResponse>(designPath(designId, '/measurements')).then((r) => byDate(r.measurements)),
     initialData: initial ? byDate(initial) : undefined,
   });
 }
@@ -68,14 +49,14 @@ export function useDeleteMeasurement(designId: string) {
 
 /** PUT /api/v1/designs/:id/calibration: a measured value adopted in place of the prediction, or null to drop it. */
 export function usePutCalibration(designId: string) {
-  return useMutation({ mutationFn: (body: Record<string, number | null>) => api.put<CalibrationView>(designPath(designId, '/calibration'), body) });
+  return useMutation({ mutationFn: (body: CalibrationBody) => api.put<CalibrationView>(designPath(designId, '/calibration'), body) });
 }
 
 /** GET /api/v1/designs/:id/attachments is rendered by the page; this cache starts from it. */
 export function useAttachments(designId: string, initial: AttachmentItem[]) {
   return useQuery({
     queryKey: keys.attachments(designId),
-    queryFn: () => api.get<{ attachments: AttachmentItem[] }>(designPath(designId, '/attachments')).then((r) => r.attachments),
+    queryFn: () => api.get<AttachmentListResponse>(designPath(designId, '/attachments')).then((r) => r.attachments),
     initialData: initial,
     staleTime: Infinity,
   });
@@ -88,7 +69,7 @@ export function useUploadAttachment(designId: string) {
     mutationFn: (file: File) => {
       const body = new FormData();
       body.set('file', file);
-      return api.post<AttachmentItem>(designPath(designId, '/attachments'), body);
+      return api.post<UploadedAttachment>(designPath(designId, '/attachments'), body);
     },
     onSuccess: (item) => qc.setQueryData<AttachmentItem[]>(keys.attachments(designId), (old) => [item, ...(old ?? [])]),
   });

@@ -1,33 +1,21 @@
 /** Designs: the library list, one design, create, save, rename, duplicate, delete, import, restore, copy of a shared one. */
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { DesignInput } from '../../design';
 import { api, designPath } from '../client';
-import type { DesignRecord, DesignRole } from '../types';
+import type {
+  AcceptInvitationResponse,
+  CreateDesignBody,
+  DesignInput,
+  DesignListItem,
+  DesignListResponse,
+  DesignRecord,
+  UpdateDesignBody as UpdateDesignWire,
+} from '../contracts';
 import { keys } from './keys';
 
-export type LibraryRow = {
-  id: string;
-  name: string;
-  role: DesignRole;
-  revision: number;
-  updatedAt: string;
-  loadedFrequency: number | null;
-  tapTurns: number | null;
-};
-
-export interface CreateDesignBody {
-  name: string;
-  design: DesignInput;
-  message?: string;
-}
-
-export interface UpdateDesignBody {
-  name?: string;
-  design: DesignInput;
-  /** the revision the edit started from; a newer one on the server gives 409 and nothing is overwritten */
-  revision: number;
-  message?: string;
-}
+export type LibraryRow = DesignListItem;
+/** A save as the designer sends it: the design is the typed input the form produced. */
+export type UpdateDesignBody = Omit<UpdateDesignWire, 'design'> & { design: DesignInput };
+export type { CreateDesignBody, DesignRecord, AcceptInvitationResponse };
 
 export const getDesign = (id: string) => api.get<DesignRecord>(designPath(id));
 export const createDesign = (body: CreateDesignBody) => api.post<DesignRecord>('/api/v1/designs', body);
@@ -35,7 +23,7 @@ export const updateDesign = (id: string, body: UpdateDesignBody) => api.put<Desi
 
 /** GET /api/v1/designs: the signed-in person's library. */
 export function useDesignList() {
-  return useQuery({ queryKey: keys.designs, queryFn: () => api.get<{ designs: LibraryRow[] }>('/api/v1/designs').then((r) => r.designs) });
+  return useQuery({ queryKey: keys.designs, queryFn: () => api.get<DesignListResponse>('/api/v1/designs').then((r) => r.designs) });
 }
 
 /** GET /api/v1/designs/:id, seeded with what the page already rendered. */
@@ -49,6 +37,12 @@ export function useDesign(id: string | null, initial?: DesignRecord) {
   });
 }
 
+/** Reads the newest stored revision of a design, past whatever the cache holds. */
+export function useFetchLatestDesign(id: string | null) {
+  const qc = useQueryClient();
+  return () => qc.fetchQuery({ queryKey: keys.design(id ?? 'new'), queryFn: () => getDesign(id!), staleTime: 0 });
+}
+
 /** POST /api/v1/designs */
 export function useCreateDesign() {
   const qc = useQueryClient();
@@ -58,9 +52,20 @@ export function useCreateDesign() {
 /** PUT /api/v1/designs/:id with the revision the edit started from; 409 when someone saved meanwhile. */
 export function useUpdateDesign(id: string) {
   const qc = useQueryClient();
+  const key = keys.design(id);
   return useMutation({
     mutationFn: (body: UpdateDesignBody) => updateDesign(id, body),
-    onSuccess: (rec) => qc.setQueryData(keys.design(id), rec),
+    // the cached design shows the edit at once and goes back to what it was if the save fails
+    onMutate: async (body) => {
+      await qc.cancelQueries({ queryKey: key });
+      const previous = qc.getQueryData<DesignRecord>(key);
+      if (previous) qc.setQueryData<DesignRecord>(key, { ...previous, name: body.name ?? previous.name, design: body.design });
+      return { previous };
+    },
+    onError: (_e, _body, ctx) => {
+      if (ctx?.previous) qc.setQueryData(key, ctx.previous);
+    },
+    onSuccess: (rec) => qc.setQueryData(key, rec),
   });
 }
 
@@ -80,7 +85,7 @@ export function useRenameDesign() {
 export function useDuplicateDesign() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (id: string) => api.post<{ id: string; name: string }>(designPath(id, '/duplicate')),
+    mutationFn: (id: string) => api.post<DesignRecord>(designPath(id, '/duplicate')),
     onSettled: () => qc.invalidateQueries({ queryKey: keys.designs }),
   });
 }
@@ -98,7 +103,7 @@ export function useDeleteDesign() {
 export function useImportDesign() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (file: unknown) => api.post<{ id: string; name: string }>('/api/v1/designs/import', file),
+    mutationFn: (file: unknown) => api.post<DesignRecord>('/api/v1/designs/import', file),
     onSettled: () => qc.invalidateQueries({ queryKey: keys.designs }),
   });
 }
@@ -108,7 +113,7 @@ export function useRestoreRevision(id: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: ({ revision, latest }: { revision: number; latest: number }) =>
-      api.post<{ revision: number }>(designPath(id, `/revisions/${revision}/restore`), { revision: latest }),
+      api.post<DesignRecord>(designPath(id, `/revisions/${revision}/restore`), { revision: latest }),
     onSettled: () => qc.invalidateQueries({ queryKey: keys.design(id) }),
   });
 }
@@ -117,7 +122,7 @@ export function useRestoreRevision(id: string) {
 export function useCopySharedDesign() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (token: string) => api.post<{ id: string }>(`/api/v1/shared/${encodeURIComponent(token)}/copy`),
+    mutationFn: (token: string) => api.post<DesignRecord>(`/api/v1/shared/${encodeURIComponent(token)}/copy`),
     onSettled: () => qc.invalidateQueries({ queryKey: keys.designs }),
   });
 }
