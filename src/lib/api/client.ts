@@ -66,11 +66,20 @@ async function failureFrom(res: Response): Promise<ApiFailure> {
     : [];
   const rawCode = typeof code === 'string' ? code : null;
   const known = toErrorCode(rawCode);
-  const text =
-    res.status === 409
-      ? errorMessages.conflict
-      : apiErrorMessage({ code: rawCode, message: typeof message === 'string' ? message : null, status: res.status });
-  return new ApiFailure(res.status, known ?? rawCode ?? (res.status === 409 ? 'conflict' : 'unknown'), text, list, extra);
+  const serverText = typeof message === 'string' && message.trim() ? message : null;
+  return new ApiFailure(res.status, known ?? rawCode ?? (res.status === 409 ? 'conflict' : 'unknown'), wording(res.status, rawCode, serverText), list, extra);
+}
+
+/**
+ * The words for a failed call. A conflict, a sign-in or permission problem, rate limiting and any server
+ * fault read the same everywhere (errors.ts); a refused request (400, 413, 415, …) keeps the server's own
+ * sentence, which names what was wrong with it.
+ */
+function wording(status: number, code: string | null, serverText: string | null): string {
+  if (status === 409) return errorMessages.conflict;
+  if (status >= 500) return errorMessages[toErrorCode(code) === 'internal_error' ? 'internal_error' : 'unknown'];
+  if ([401, 403, 404, 429].includes(status)) return apiErrorMessage({ code, message: null, status });
+  return serverText ?? apiErrorMessage({ code, message: null, status });
 }
 
 /**

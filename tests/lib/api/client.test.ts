@@ -50,6 +50,10 @@ function route(req: IncomingMessage, res: ServerResponse, body: string) {
       return send(res, 502, 'text/html', '<html><body>Bad gateway</body></html>');
     case '/api/v1/broken-json':
       return send(res, 200, 'application/json', '{"designs": [');
+    case '/api/v1/upload':
+      return send(res, 415, 'application/json', JSON.stringify({ error: { code: 'unsupported_media_type', message: 'notes.exe is not an accepted kind of file.' } }));
+    case '/api/v1/server-fault':
+      return send(res, 500, 'application/json', JSON.stringify({ error: { code: 'internal_error', message: 'SQLITE_BUSY: database is locked' } }));
     case '/api/v1/forbidden':
       return send(res, 403, 'application/json', JSON.stringify({ error: { code: 'forbidden', message: 'not yours' } }));
     default:
@@ -131,6 +135,13 @@ describe('api client', () => {
   it('uses our words for a known code rather than the server text', async () => {
     const f = await failure(api.get('/api/v1/forbidden'));
     expect(f.message).toBe(errorMessages.forbidden);
+  });
+
+  it('keeps the server sentence of a refused request, and never a server fault text', async () => {
+    expect((await failure(api.post('/api/v1/upload', new FormData()))).message).toBe('notes.exe is not an accepted kind of file.');
+    const f = await failure(api.get('/api/v1/server-fault'));
+    expect(f.status).toBe(500);
+    expect(f.message).toBe(errorMessages.internal_error);
   });
 
   it('explains an error answer that is not JSON by its status', async () => {
