@@ -3,8 +3,6 @@ import { failureMessage } from '~/lib/api/client';
 import { withApi } from '~/lib/api/provider';
 import { useAttachments, useDeleteAttachment, useUploadAttachment, type AttachmentItem } from '~/lib/api/queries/bench';
 
-export type { AttachmentItem };
-
 type Props = { designId: string; canWrite: boolean; initial: AttachmentItem[] };
 
 const sizeText = (b: number) => (b >= 1024 * 1024 ? `${(b / (1024 * 1024)).toFixed(1)} MB` : `${Math.max(1, Math.round(b / 1024))} kB`);
