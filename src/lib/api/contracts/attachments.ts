@@ -6,7 +6,8 @@ export const INSTRUMENT_MAX_BYTES = 2 * 1024 * 1024;
 export const PHOTO_TYPES = ['image/jpeg', 'image/png', 'image/webp'] as const;
 export const INSTRUMENT_EXTENSIONS = ['.s1p', '.s2p', '.csv', '.txt'] as const;
 
-export const attachmentKindSchema = z.enum(['photo', 'instrument']);
+export const ATTACHMENT_KINDS = ['photo', 'instrument'] as const;
+export const attachmentKindSchema = z.enum(ATTACHMENT_KINDS);
 
 /** A stored file of a design; `url` and `thumbnailUrl` stream it through a role check. */
 export const attachmentSchema = z.object({
@@ -49,3 +50,6 @@ export type Attachment = z.infer<typeof attachmentSchema>;
 export type AttachmentListResponse = z.infer<typeof attachmentListResponseSchema>;
 export type SweepSummary = z.infer<typeof sweepSummarySchema>;
 export type UploadedAttachment = z.infer<typeof uploadedAttachmentSchema>;
+
+/** The multipart form of an upload: one file in the field `file`. */
+export const uploadFormSchema = z.object({ file: z.file() });

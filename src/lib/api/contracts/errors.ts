@@ -1,5 +1,18 @@
 import { z } from 'zod';
-import { apiErrorCodes } from '../../api-errors';
+/** The stable error codes of the /api/v1 endpoints; their words are in lib/errors.ts. */
+export const apiErrorCodes = [
+  'validation_failed',
+  'invalid_json',
+  'unauthorized',
+  'forbidden',
+  'not_found',
+  'conflict',
+  'payload_too_large',
+  'rate_limited',
+  'email_not_verified',
+  'unsupported_media_type',
+  'internal_error',
+] as const;
 
 export const apiErrorCodeSchema = z.enum(apiErrorCodes);
 

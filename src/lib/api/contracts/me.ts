@@ -28,3 +28,4 @@ export const updateMeBodySchema = z
 export type SessionUser = z.infer<typeof sessionUserSchema>;
 export type MeResponse = z.infer<typeof meResponseSchema>;
 export type UpdateMeBody = z.input<typeof updateMeBodySchema>;
+export type { UnitSystem } from '../../format/length';

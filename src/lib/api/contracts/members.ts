@@ -2,7 +2,8 @@ import { z } from 'zod';
 import { timestampSchema } from './common';
 
 /** The roles an owner hands out; "owner" itself changes only by a transfer. */
-export const memberRoleSchema = z.enum(['editor', 'viewer'], { error: 'Choose editor or viewer.' });
+export const MEMBER_ROLES = ['editor', 'viewer'] as const;
+export const memberRoleSchema = z.enum(MEMBER_ROLES, { error: 'Choose editor or viewer.' });
 
 /** One person on GET /api/v1/designs/:id/members: the owner first, then members by when they joined. */
 export const personSchema = z.object({
@@ -10,7 +11,7 @@ export const personSchema = z.object({
   name: z.string(),
   /** shown to the owner and admins, and to each person for themselves; otherwise null */
   email: z.string().nullable(),
-  role: z.enum(['owner', ...memberRoleSchema.options]),
+  role: z.enum(['owner', ...MEMBER_ROLES]),
   since: timestampSchema,
 });
 

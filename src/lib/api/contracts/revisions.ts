@@ -79,3 +79,6 @@ export type CompareQuery = z.output<typeof compareQuerySchema>;
 export type InputChange = z.infer<typeof inputChangeSchema>;
 export type FigureChange = z.infer<typeof figureChangeSchema>;
 export type CompareResponse = z.infer<typeof compareResponseSchema>;
+
+/** The `:revision` of a path: a whole number from 1; anything else names no revision (404). */
+export const revisionNumberParamSchema = z.coerce.number().int().min(1);
