@@ -9,6 +9,7 @@ import {
 } from '@tanstack/react-table';
 import { authErrorMessage, errorMessages } from '~/lib/errors';
 import { FormMessage } from '~/components/ui/FormMessage';
+import { formatDate } from '~/lib/format';
 import { SortableTableHead } from '~/components/ui/SortableTableHead';
 import { listUsers, type SiteRoleName, type UserRow } from './list-users';
 import { setUserDisabled, setUserRole } from './update-user';
@@ -17,10 +18,6 @@ type Props = { currentUserId: string; pageSize?: number };
 
 const column = createColumnHelper<UserRow>();
 
-function formatDate(iso: string): string {
-  if (!iso) return '—';
-  return new Date(iso).toLocaleDateString(undefined, { year: 'numeric', month: 'short', day: 'numeric' });
-}
 
 export default function UsersTable({ currentUserId, pageSize = 25 }: Props) {
   const [rows, setRows] = useState<UserRow[]>([]);

@@ -1,5 +1,5 @@
 import { useId, useState, type FormEvent } from 'react';
-import { formatFixed, formatQuantity, lengthInputText, type UnitSystem } from '~/lib/format';
+import { formatFixed, formatQuantity, lengthInputText, parseQuantityLazy, type UnitSystem } from '~/lib/format';
 import type { Goal, GoalAnswer } from '../../workers/protocol';
 import { solverClient } from './solver-client';
 
@@ -42,9 +42,7 @@ export function GoalPanel({ input, system, hasPrimary, hasTank, readOnly, apply 
 
   async function onFrequency(e: FormEvent) {
     e.preventDefault();
-    // the unit parser is loaded when first needed, not with the page
-    const { parseQuantity } = await import('~/lib/design/units');
-    const p = parseQuantity(freq, 'frequency');
+    const p = await parseQuantityLazy(freq, 'frequency');
     if (!p.ok || !(p.value > 0)) return setStatus((s) => ({ ...s, frequency: { tone: 'fault', text: `Target frequency: ${p.ok ? 'must be above 0' : p.message}` } }));
     void run(
       { kind: 'frequency', hz: p.value },

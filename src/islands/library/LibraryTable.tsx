@@ -12,7 +12,7 @@ import {
 } from '@tanstack/react-table';
 import { FormMessage } from '~/components/ui/FormMessage';
 import { SortableTableHead } from '~/components/ui/SortableTableHead';
-import { formatSI, formatTurns } from '~/lib/library/format';
+import { formatDate, formatSi, formatTurns } from '~/lib/format';
 import { Dialog } from './Dialog';
 import { deleteDesign, duplicateDesign, importDesign, listDesigns, renameDesign, type LibraryRole, type LibraryRow } from './library-api';
 
@@ -21,10 +21,6 @@ type Props = { pageSize?: number };
 const roleLabel: Record<LibraryRole, string> = { owner: 'Owner', editor: 'Editor', viewer: 'Viewer', admin: 'Site admin' };
 const column = createColumnHelper<LibraryRow>();
 
-function formatDate(iso: string): string {
-  const d = new Date(iso);
-  return Number.isNaN(d.getTime()) ? '—' : d.toLocaleString(undefined, { year: 'numeric', month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit' });
-}
 
 export default function LibraryTable({ pageSize = 20 }: Props) {
   const [rows, setRows] = useState<LibraryRow[]>([]);
@@ -112,10 +108,10 @@ export default function LibraryTable({ pageSize = 20 }: Props) {
       column.accessor('loadedFrequency', {
         header: 'Loaded frequency',
         sortUndefined: 'last',
-        cell: (c) => <span className="tabular-nums">{formatSI(c.getValue(), 'Hz')}</span>,
+        cell: (c) => <span className="tabular-nums">{formatSi(c.getValue(), 'Hz', 3)}</span>,
       }),
       column.accessor('tapTurns', { header: 'Tap', cell: (c) => <span className="tabular-nums">{formatTurns(c.getValue())}</span> }),
-      column.accessor('updatedAt', { header: 'Updated', sortingFn: 'datetime', cell: (c) => formatDate(c.getValue()) }),
+      column.accessor('updatedAt', { header: 'Updated', sortingFn: 'datetime', cell: (c) => formatDate(c.getValue(), true) }),
       column.accessor('role', {
         header: 'My role',
         filterFn: 'equals',
