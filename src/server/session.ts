@@ -1,6 +1,8 @@
 import type { SiteRole } from '../lib/permissions';
 
-export type UnitSystem = 'metric' | 'imperial';
+import type { UnitSystem } from '../lib/format/length';
+
+export type { UnitSystem };
 
 export type SessionUser = {
   id: string;

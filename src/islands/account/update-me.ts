@@ -1,6 +1,8 @@
 import type { ErrorLike } from '~/lib/errors';
 
-export type UnitSystem = 'metric' | 'imperial';
+import type { UnitSystem } from '~/lib/format';
+
+export type { UnitSystem };
 export type MePatch = { unitSystem?: UnitSystem; name?: string };
 
 export type ApiIssue = { path: string; message: string };

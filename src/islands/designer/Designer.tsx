@@ -2,6 +2,7 @@ import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import { FormProvider, useForm, useWatch, type FieldErrors, type Resolver } from 'react-hook-form';
 import { QueryClient, QueryClientProvider, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { DesignInput } from '~/lib/design';
+import { checkDesignName, copyName } from '~/lib/design/name';
 import { formatQuantity, lengthInputText, type UnitSystem } from '~/lib/format';
 import type { SolverWarning } from '~/solver';
 import { createDesign } from '~/lib/api/create-design';
@@ -49,9 +50,8 @@ const resolver: Resolver<FormValues> = async (values, context, options) => {
   const schema = await loadSchemaResolver();
   const r = await schema(toDesignInput(values) as unknown as FormValues, context, options);
   const errors: FieldErrors<FormValues> = { ...r.errors };
-  const name = values.name.trim();
-  if (!name) errors.name = { type: 'required', message: 'Give the design a name.' };
-  else if (name.length > 120) errors.name = { type: 'maxLength', message: 'Keep the name under 120 characters.' };
+  const nameError = checkDesignName(values.name);
+  if (nameError) errors.name = { type: 'validate', message: nameError };
   return Object.keys(errors).length ? { values: {}, errors } : { values, errors: {} };
 };
 
@@ -264,7 +264,7 @@ function DesignerInner({ signedIn, unitSystem, record, start, signInHref = '/sig
     const mine = conflict;
     if (!mine) return;
     try {
-      const rec = await createDesign({ name: `${mine.name.trim()} (copy)`.slice(0, 120), design: toDesignInput(mine) });
+      const rec = await createDesign({ name: copyName(mine.name.trim()), design: toDesignInput(mine) });
       guard.allow();
       setConflict(null);
       setStatus('Saved as a copy. Opening it…');

@@ -13,6 +13,7 @@ import {
 import { FormMessage } from '~/components/ui/FormMessage';
 import { SortableTableHead } from '~/components/ui/SortableTableHead';
 import { formatDate, formatSi, formatTurns } from '~/lib/format';
+import { checkDesignName } from '~/lib/design/name';
 import { Dialog } from './Dialog';
 import { deleteDesign, duplicateDesign, importDesign, listDesigns, renameDesign, type LibraryRole, type LibraryRow } from './library-api';
 
@@ -67,8 +68,8 @@ export default function LibraryTable({ pageSize = 20 }: Props) {
     e.preventDefault();
     if (!renaming) return;
     const name = newName.trim();
-    if (!name) return setNameError('Give the design a name.');
-    if (name.length > 120) return setNameError('Keep the name under 120 characters.');
+    const nameError = checkDesignName(name);
+    if (nameError) return setNameError(nameError);
     const target = renaming;
     setRenaming(null);
     await run(async () => {

@@ -1,6 +1,8 @@
 import { call } from '~/lib/library/api-call';
 
-export type LibraryRole = 'owner' | 'editor' | 'viewer' | 'admin';
+import type { DesignRole } from '~/lib/permissions';
+
+export type LibraryRole = DesignRole;
 export type LibraryRow = {
   id: string;
   name: string;

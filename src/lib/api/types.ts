@@ -1,7 +1,9 @@
 import type { DesignInput } from '../design';
 import type { Result } from '../../solver/types';
 
-export type DesignRole = 'owner' | 'editor' | 'viewer' | 'admin';
+import type { DesignRole } from '../permissions';
+
+export type { DesignRole };
 
 /** A design as GET /api/v1/designs/:id returns it. */
 export interface DesignRecord {

@@ -1,6 +1,6 @@
 /** Display formatting for the build sheet: metric first, inches or feet in brackets, no NaN ever shown. */
 
-const IN = 0.0254;
+import { METRES_PER_INCH as IN } from '../format/length';
 const FT = 0.3048;
 const LB = 0.45359237;
 

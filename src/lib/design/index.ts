@@ -13,6 +13,7 @@ export { QUANTITY_KINDS, type QuantityKind, type QuantityParse } from '../format
 export { parseQuantity } from '../format/units-mathjs';
 export { DESIGN_FIELDS, DESIGN_PARTS, designField, findDesignField, pathsOfKind, type DesignFieldPath, type FieldSpec, type FieldKind } from './registry';
 export { RESULT_FIGURES, resultFigure, figureOf, type ResultFigure, type ResultFigureId } from './figures';
-export { designNameSchema, checkDesignName, DESIGN_NAME_MAX } from './name';
+export { designNameSchema } from './schema';
+export { checkDesignName, copyName, DESIGN_NAME_MAX } from './name';
 export type { QuantityInput } from './fields';
 export { exampleDesigns, type ExampleDesign } from './examples';

@@ -1,16 +1,13 @@
-import { z } from 'zod';
-
+/** The name rule of a design, for the API (through the schema's `designNameSchema`), the designer and the library. */
 export const DESIGN_NAME_MAX = 120;
-const REQUIRED = 'Give the design a name.';
-const TOO_LONG = `Keep the name under ${DESIGN_NAME_MAX} characters.`;
+export const DESIGN_NAME_REQUIRED = 'Give the design a name.';
 
-/** A design's name: some text after trimming, at most 120 characters. The API, the designer and the library all check it so. */
-export const designNameSchema = z.string({ error: REQUIRED }).trim().min(1, REQUIRED).max(DESIGN_NAME_MAX, TOO_LONG);
-
-/** The name rule for a form: the message for a bad name, or null when it is fine. */
+/** The message for a bad design name, or null when it is fine: some text after trimming, at most 120 characters. */
 export function checkDesignName(name: string): string | null {
-  const r = designNameSchema.safeParse(name);
-  return r.success ? null : r.error.issues[0].message;
+  const t = name.trim();
+  if (t === '') return DESIGN_NAME_REQUIRED;
+  if (t.length > DESIGN_NAME_MAX) return `Keep the name under ${DESIGN_NAME_MAX} characters.`;
+  return null;
 }
 
 /** "Name (copy)" cut to fit the name rule. */

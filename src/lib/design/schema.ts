@@ -1,6 +1,16 @@
 import { z } from 'zod';
 import { numberField, quantityField } from './fields';
 import { designField, KNOWN_FIELD_NAMES } from './registry';
+import { checkDesignName, DESIGN_NAME_REQUIRED } from './name';
+
+/** A design's name as the API takes it: trimmed, with the one name rule. */
+export const designNameSchema = z
+  .string({ error: DESIGN_NAME_REQUIRED })
+  .trim()
+  .superRefine((name, ctx) => {
+    const message = checkDesignName(name);
+    if (message) ctx.addIssue({ code: 'custom', message });
+  });
 
 export const wireAwgSchema = z
   .strictObject({

@@ -17,9 +17,10 @@ export {
   QUANTITY_KINDS,
   SIMPLE_UNITS,
   parseQuantityQuick,
-  parseQuantityLazy,
   readSimpleQuantity,
+  siFactor,
   type QuantityKind,
   type QuantityParse,
   type SimpleUnit,
 } from './units';
+export { parseQuantityLazy } from './units-lazy';

@@ -114,13 +114,8 @@ export function expectedText(kind: QuantityKind): string {
   return `expected ${info.noun} such as ${info.examples}`;
 }
 
-/**
- * Reads a quantity as `parseQuantity` does, loading mathjs only when the text is not a plain form: for the
- * browser's main thread, which should not carry the unit library for "12 mm".
- */
-export async function parseQuantityLazy(input: number | string, kind: QuantityKind): Promise<QuantityParse> {
-  const quick = parseQuantityQuick(input, kind);
-  if (quick) return quick;
-  const { parseQuantity } = await import('./units-mathjs');
-  return parseQuantity(input, kind);
+/** The size in SI of a unit of the plain forms ("mH", "µH", "in"); undefined for a unit it does not know. */
+export function siFactor(unit: string): number | undefined {
+  const u = SIMPLE_UNITS.get(unit.replace(/[µμ]/g, 'u'));
+  return u ? u.unitValue * u.prefixValue : undefined;
 }

@@ -4,16 +4,13 @@ import { z } from 'zod';
 import type { Db } from '../db/client';
 import { designs, designRevisions, designMembers, designShares, user } from '../db/schema';
 import { designCan, type DesignAction, type DesignRole } from '../../lib/permissions';
+import { designNameSchema } from '../../lib/design/schema';
 import type { SessionUser } from '../session';
 import { ApiError } from '../http';
 import { prefixIssues, solveStored, validateDesign } from './solve';
 import { deleteAttachmentsOf } from './attachments';
 
-export const designNameSchema = z
-  .string({ error: 'Give the design a name.' })
-  .trim()
-  .min(1, 'Give the design a name.')
-  .max(120, 'Keep the name under 120 characters.');
+export { designNameSchema };
 
 export const createDesignBody = z.object({ name: designNameSchema, design: z.unknown(), message: z.string().max(500).optional() });
 export const updateDesignBody = z.object({

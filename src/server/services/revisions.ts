@@ -7,6 +7,7 @@ import { ApiError } from '../http';
 import { compareDesigns } from '../../lib/library/compare';
 import { authorize, createDesign, designNameSchema, getShared, parseBody, updateDesign } from './designs';
 import { solveStored } from './solve';
+import { copyName } from '../../lib/design/name';
 
 export const restoreRevisionBody = z
   .object({
@@ -19,10 +20,6 @@ export const compareQuery = z.object({ from: z.coerce.number().int().min(1), to:
 
 export const copyDesignBody = z.object({ name: designNameSchema.optional() }).optional();
 
-function copyName(name: string): string {
-  const suffix = ' (copy)';
-  return name.length + suffix.length > 120 ? `${name.slice(0, 120 - suffix.length)}${suffix}` : `${name}${suffix}`;
-}
 
 async function revisionRow(db: Db, designId: string, n: number) {
   const r = await db.query.designRevisions.findFirst({ where: and(eq(designRevisions.designId, designId), eq(designRevisions.revision, n)) });
