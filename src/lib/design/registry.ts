@@ -186,7 +186,8 @@ export const DESIGN_FIELDS = [
     help: 'sphere diameter',
     example: { metric: '300 mm', imperial: '12 in' },
     bounds: toploadBounds,
-    default: { metres: 0.3 },
+    // small enough that the topload's default elevation clears the winding
+    default: { metres: 0.15 },
   },
   {
     path: 'topload.elevation',
