@@ -28,7 +28,7 @@ export interface FormatOptions {
 }
 
 /** Exact by definition: the avoirdupois pound (1959), NIST SP 811 (2008) Appendix B.8. */
-const KILOGRAMS_PER_POUND = 0.45359237;
+export const KILOGRAMS_PER_POUND = 0.45359237;
 
 const CAPACITANCE_PREFIXES = ['p', 'n', 'µ', 'm', ''] as const;
 const INDUCTANCE_PREFIXES = ['n', 'µ', 'm', ''] as const;
