@@ -9,6 +9,7 @@ import {
 } from '@tanstack/react-table';
 import { authErrorMessage, errorMessages } from '~/lib/errors';
 import { FormMessage } from '~/components/ui/FormMessage';
+import { formatDate } from '~/lib/format';
 import { SortableTableHead } from '~/components/ui/SortableTableHead';
 import { withApi } from '~/lib/api/provider';
 import { AuthFailure, useSetUserDisabled, useSetUserRole, useUsers, type SiteRoleName, type UserRow } from '~/lib/api/queries/admin';
@@ -21,10 +22,6 @@ function failureText(e: unknown): string {
   return e instanceof AuthFailure ? authErrorMessage(e.error) : errorMessages.network_error;
 }
 
-function formatDate(iso: string): string {
-  if (!iso) return '—';
-  return new Date(iso).toLocaleDateString(undefined, { year: 'numeric', month: 'short', day: 'numeric' });
-}
 
 function UsersTable({ currentUserId, pageSize = 25 }: Props) {
   const [offset, setOffset] = useState(0);

@@ -3,6 +3,7 @@ import type { UseFormReset } from 'react-hook-form';
 import { ApiFailure } from '~/lib/api/client';
 import { useCreateDesign, useDesign, useFetchLatestDesign, useUpdateDesign, type DesignRecord } from '~/lib/api/queries/designs';
 import type { ApiIssue } from '~/lib/api-errors';
+import { copyName } from '~/lib/design/name';
 import type { UnitSystem } from '~/lib/format';
 import { fromDesignInput, toDesignInput, type FormValues } from './form/values';
 
@@ -113,7 +114,7 @@ export function useDesignSave({ record, signedIn, readOnly, system, reset, onSav
     const mine = conflict;
     if (!mine) return;
     try {
-      const rec = await create.mutateAsync({ name: `${mine.name.trim()} (copy)`.slice(0, 120), design: toDesignInput(mine) });
+      const rec = await create.mutateAsync({ name: copyName(mine.name.trim()), design: toDesignInput(mine) });
       setConflict(null);
       openCreated(rec, 'Saved as a copy. Opening it…');
     } catch (e) {

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { failureMessage } from '~/lib/api/client';
 import { withApi } from '~/lib/api/provider';
 import { useRestoreRevision } from '~/lib/api/queries/designs';
-import { formatSI, formatTurns } from '~/lib/library/format';
+import { formatDate, formatSi, formatTurns } from '~/lib/format';
 
 export type RevisionRow = {
   revision: number;
@@ -17,7 +17,7 @@ export type RevisionRow = {
 type Props = { designId: string; latest: number; canWrite: boolean; revisions: RevisionRow[] };
 
 function when(iso: string) {
-  return new Date(iso).toLocaleString(undefined, { year: 'numeric', month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit' });
+  return formatDate(iso, true);
 }
 
 /** Every revision, newest first; pick two to compare, open one read-only, or restore one as a new revision. */
@@ -80,7 +80,7 @@ function HistoryTable({ designId, latest, canWrite, revisions }: Props) {
                 <td className="px-3 py-2">{when(r.createdAt)}</td>
                 <td className="px-3 py-2">{r.author}</td>
                 <td className="px-3 py-2">{r.message ?? <span className="text-ink-soft">—</span>}</td>
-                <td className="px-3 py-2 tabular-nums">{formatSI(r.loadedFrequency, 'Hz')}</td>
+                <td className="px-3 py-2 tabular-nums">{formatSi(r.loadedFrequency, 'Hz', 3)}</td>
                 <td className="px-3 py-2 tabular-nums">{formatTurns(r.tapTurns)}</td>
                 <td className="px-3 py-2">
                   <div className="flex justify-end gap-1">

@@ -12,7 +12,8 @@ import {
 } from '@tanstack/react-table';
 import { FormMessage } from '~/components/ui/FormMessage';
 import { SortableTableHead } from '~/components/ui/SortableTableHead';
-import { formatSI, formatTurns } from '~/lib/library/format';
+import { formatDate, formatSi, formatTurns } from '~/lib/format';
+import { checkDesignName } from '~/lib/design/name';
 import { Dialog } from './Dialog';
 import { ApiFailure, failureMessage } from '~/lib/api/client';
 import { withApi } from '~/lib/api/provider';
@@ -24,10 +25,6 @@ type Props = { pageSize?: number };
 const roleLabel: Record<DesignRole, string> = { owner: 'Owner', editor: 'Editor', viewer: 'Viewer', admin: 'Site admin' };
 const column = createColumnHelper<LibraryRow>();
 
-function formatDate(iso: string): string {
-  const d = new Date(iso);
-  return Number.isNaN(d.getTime()) ? '—' : d.toLocaleString(undefined, { year: 'numeric', month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit' });
-}
 
 function LibraryTable({ pageSize = 20 }: Props) {
   const list = useDesignList();
@@ -70,8 +67,8 @@ function LibraryTable({ pageSize = 20 }: Props) {
     e.preventDefault();
     if (!renaming) return;
     const name = newName.trim();
-    if (!name) return setNameError('Give the design a name.');
-    if (name.length > 120) return setNameError('Keep the name under 120 characters.');
+    const nameError = checkDesignName(name);
+    if (nameError) return setNameError(nameError);
     const target = renaming;
     setRenaming(null);
     await run(() => rename.mutateAsync({ id: target.id, name }), `Renamed to “${name}”.`, (f) => f.issues[0]?.message ?? f.message);
@@ -110,10 +107,10 @@ function LibraryTable({ pageSize = 20 }: Props) {
       column.accessor('loadedFrequency', {
         header: 'Loaded frequency',
         sortUndefined: 'last',
-        cell: (c) => <span className="tabular-nums">{formatSI(c.getValue(), 'Hz')}</span>,
+        cell: (c) => <span className="tabular-nums">{formatSi(c.getValue(), 'Hz', 3)}</span>,
       }),
       column.accessor('tapTurns', { header: 'Tap', cell: (c) => <span className="tabular-nums">{formatTurns(c.getValue())}</span> }),
-      column.accessor('updatedAt', { header: 'Updated', sortingFn: 'datetime', cell: (c) => formatDate(c.getValue()) }),
+      column.accessor('updatedAt', { header: 'Updated', sortingFn: 'datetime', cell: (c) => formatDate(c.getValue(), true) }),
       column.accessor('role', {
         header: 'My role',
         filterFn: 'equals',

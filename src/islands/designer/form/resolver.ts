@@ -1,4 +1,5 @@
 import type { FieldErrors, Resolver } from 'react-hook-form';
+import { checkDesignName } from '~/lib/design/name';
 import { toDesignInput, type FormValues } from './values';
 
 // The schema and its unit parser load on the first check (the first save), not with the page: the
@@ -16,8 +17,7 @@ export const designResolver: Resolver<FormValues> = async (values, context, opti
   const schema = await loadSchemaResolver();
   const r = await schema(toDesignInput(values) as unknown as FormValues, context, options);
   const errors: FieldErrors<FormValues> = { ...r.errors };
-  const name = values.name.trim();
-  if (!name) errors.name = { type: 'required', message: 'Give the design a name.' };
-  else if (name.length > 120) errors.name = { type: 'maxLength', message: 'Keep the name under 120 characters.' };
+  const nameError = checkDesignName(values.name);
+  if (nameError) errors.name = { type: 'validate', message: nameError };
   return Object.keys(errors).length ? { values: {}, errors } : { values, errors: {} };
 };
