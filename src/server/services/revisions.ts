@@ -10,6 +10,7 @@ import { authorize } from './access';
 import { createDesign, updateDesign } from './designs';
 import { sharedRow } from './shares';
 import { solveStored } from './solve';
+import { copyName } from '../../lib/design/name';
 
 async function revisionRow(designId: string, n: number) {
   const r = await database().query.designRevisions.findFirst({ where: and(eq(designRevisions.designId, designId), eq(designRevisions.revision, n)) });
@@ -51,11 +52,6 @@ export async function getRevision(u: SessionUser, id: string, revision: number):
 export async function revisionOf(id: string, revision: number): Promise<RevisionRecord> {
   const r = await revisionRow(id, revision);
   return { revision: r.revision, name: r.name, design: r.design, createdAt: r.createdAt.toISOString(), message: r.message, result: solveStored(r.design) };
-}
-
-function copyName(name: string): string {
-  const suffix = ' (copy)';
-  return name.length + suffix.length > 120 ? `${name.slice(0, 120 - suffix.length)}${suffix}` : `${name}${suffix}`;
 }
 
 /**

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { designInputSchema, type DesignInput } from '../../design/schema';
+import { designInputSchema, designNameSchema, type DesignInput } from '../../design/schema';
 import type { Result } from '../../../solver/types';
 import { designRoles } from '../../permissions';
 
@@ -10,12 +10,8 @@ export const timestampSchema = z.iso.datetime({ offset: true });
 
 export const designRoleSchema = z.enum(designRoles);
 
-/** The words a design name is checked with, everywhere a name is given. */
-export const designNameSchema = z
-  .string({ error: 'Give the design a name.' })
-  .trim()
-  .min(1, 'Give the design a name.')
-  .max(120, 'Keep the name under 120 characters.');
+/** The name rule of a design, written once in the design schema. */
+export { designNameSchema };
 
 /** A revision message; optional on every save. */
 export const revisionMessageSchema = z.string().max(500, 'Keep the message under 500 characters.');
