@@ -18,6 +18,7 @@ const SOLVER_FORBIDDEN_GLOBALS = [
   'sessionStorage', 'indexedDB', 'performance', 'crypto', 'process', 'setTimeout', 'setInterval',
 ];
 
+/** @param {string} target */
 const serverZone = (target) => ({
   target,
   from: './src/server',

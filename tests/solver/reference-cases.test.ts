@@ -1,17 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { referenceCases } from '../../src/lib/validation/cases';
 import { physicsCases } from '../../src/lib/validation/cases-physics';
+import { assertClose } from '../helpers/assertClose';
 
 describe('referenceCases', () => {
   it.each(referenceCases.map((c) => [c.id, c] as const))('%s agrees with its reference within tolerance', (_id, c) => {
-    const got = c.compute();
-    const err = Math.abs(got - c.reference) / Math.abs(c.reference);
-    if (!Number.isFinite(got) || !(err <= c.tolerance)) {
-      throw new Error(
-        `${c.id} (${c.quantity}) inputs ${JSON.stringify(c.inputs)}: got ${got} ${c.unit}, expected ${c.reference} ${c.unit}, ` +
-          `relative error ${err.toExponential(3)} > tolerance ${c.tolerance} — source: ${c.source}`,
-      );
-    }
+    assertClose(c.compute(), c.reference, c.tolerance, `${c.id} (${c.quantity}, ${c.unit}) inputs ${JSON.stringify(c.inputs)}, source: ${c.source}`);
   });
 
   it('referenceCases has unique ids, a source for every case and at most 3 cases per quantity', () => {
