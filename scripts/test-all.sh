@@ -11,7 +11,9 @@ node scripts/check-node.mjs || { echo "0 passed, 1 failed"; exit 1; }
 stages=" ${COILWRIGHT_STAGES:-lint types astro build vitest browser} "
 wants() { [[ "$stages" == *" $1 "* ]]; }
 mkdir -p test-results
-rm -f test-results/vitest.json "${PW_JSON:-test-results/playwright.json}"
+# results of an earlier run never count: remove the reports of the stages about to run
+wants vitest && rm -f test-results/vitest.json
+wants browser && rm -f "${PW_JSON:-test-results/playwright.json}"
 stage_passed=0
 stage_failed=0
 browser_ran=0
