@@ -1,5 +1,7 @@
 import { useState } from 'react';
-import { call } from '~/lib/library/api-call';
+import { failureMessage } from '~/lib/api/client';
+import { withApi } from '~/lib/api/provider';
+import { useRestoreRevision } from '~/lib/api/queries/designs';
 import { formatSI, formatTurns } from '~/lib/library/format';
 
 export type RevisionRow = {
@@ -19,19 +21,15 @@ function when(iso: string) {
 }
 
 /** Every revision, newest first; pick two to compare, open one read-only, or restore one as a new revision. */
-export default function HistoryTable({ designId, latest, canWrite, revisions }: Props) {
+function HistoryTable({ designId, latest, canWrite, revisions }: Props) {
   const [from, setFrom] = useState(revisions[1]?.revision ?? revisions[0]?.revision ?? 1);
   const [to, setTo] = useState(revisions[0]?.revision ?? 1);
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
+  const restoring = useRestoreRevision(designId);
+  const busy = restoring.isPending;
+  const error = restoring.error ? failureMessage(restoring.error) : null;
 
-  async function restore(n: number) {
-    setBusy(true);
-    setError(null);
-    const r = await call<{ revision: number }>('POST', `/api/v1/designs/${designId}/revisions/${n}/restore`, { revision: latest });
-    setBusy(false);
-    if (!r.ok) return setError(r.status === 409 ? 'Someone saved a newer revision meanwhile; reload the page and try again.' : r.message);
-    window.location.assign(`/designs/${designId}/history?restored=${r.data.revision}`);
+  function restore(n: number) {
+    restoring.mutate({ revision: n, latest }, { onSuccess: (r) => window.location.assign(`/designs/${designId}/history?restored=${r.revision}`) });
   }
 
   return (
@@ -90,7 +88,7 @@ export default function HistoryTable({ designId, latest, canWrite, revisions }: 
                       Open<span className="sr-only"> revision {r.revision}</span>
                     </a>
                     {canWrite && r.revision !== latest && (
-                      <button type="button" className="cw-btn cw-btn-quiet cw-btn-small" disabled={busy} onClick={() => void restore(r.revision)}>
+                      <button type="button" className="cw-btn cw-btn-quiet cw-btn-small" disabled={busy} onClick={() => restore(r.revision)}>
                         Restore<span className="sr-only"> revision {r.revision}</span>
                       </button>
                     )}
@@ -104,3 +102,6 @@ export default function HistoryTable({ designId, latest, canWrite, revisions }: 
     </div>
   );
 }
+
+/** Every revision, newest first; pick two to compare, open one read-only, or restore one as a new revision. */
+export default withApi(HistoryTable);

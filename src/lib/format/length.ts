@@ -1,6 +1,8 @@
 import { formatSignificant, MISSING } from './number';
 
-export type UnitSystem = 'metric' | 'imperial';
+/** The two ways lengths are shown; a user's preference. */
+export const UNIT_SYSTEMS = ['metric', 'imperial'] as const;
+export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
 
 /** Exact by definition: the international inch (1959), NIST SP 811 (2008) Appendix B.8. */
 export const METRES_PER_INCH = 0.0254;

@@ -1,20 +1,9 @@
 import { keyFigures, figureValue } from './figures';
 import { flatten, formatInput, inputLabel } from './inputs';
 import { formatSI, formatTurns } from './format';
+import type { FigureChange, InputChange } from '../api/contracts/revisions';
 
-export type InputChange = { path: string; label: string; from: string; to: string };
-export type FigureChange = {
-  key: string;
-  label: string;
-  unit: string;
-  from: number | null;
-  to: number | null;
-  fromText: string;
-  toText: string;
-  /** relative change (to − from) / from; null when either side is missing or from is 0 */
-  relative: number | null;
-  changed: boolean;
-};
+export type { InputChange, FigureChange };
 
 function show(value: number | null, unit: string): string {
   return unit === 'turns' ? formatTurns(value) : formatSI(value, unit);
