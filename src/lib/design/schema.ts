@@ -29,7 +29,28 @@ const b = {
   awg: { min: AWG_MIN, max: AWG_MAX, minInclusive: true, label: `a whole gauge from ${AWG_MIN} (0000) to ${AWG_MAX}` },
   series: { min: 1, max: 10000, minInclusive: true, label: 'a whole number from 1 to 10000' },
   coupling: { min: 0, max: 0.9, minInclusive: false, label: 'greater than 0 and at most 0.9' },
+  permittivity: { min: 1, max: 20, minInclusive: true, label: 'between 1 (air) and 20' },
+  wallThickness: { min: 0, max: 1.5, minInclusive: true, label: 'between 0 and 1.5 m (a wall as thick as the radius is a solid rod)' },
+  railDiameter: { min: 1e-2, max: 20, minInclusive: true, label: 'between 1 cm and 20 m' },
 } as const;
+
+export const FORMER_MATERIALS = ['air', 'pvc', 'acrylic', 'polyethylene', 'polystyrene', 'cardboard'] as const;
+
+export const formerSchema = z
+  .strictObject({
+    material: z
+      .enum(FORMER_MATERIALS, { error: () => `expected one of ${FORMER_MATERIALS.map((m) => `"${m}"`).join(', ')}` })
+      .describe('material of the coil form; sets the permittivity')
+      .optional(),
+    permittivity: count(b.permittivity, 'relative permittivity of the form wall (instead of a material)', false).optional(),
+    wallThickness: quantity('length', b.wallThickness, 'wall thickness of the form; default 3 mm').optional(),
+  })
+  .superRefine((f, ctx) => {
+    if (f.material !== undefined && f.permittivity !== undefined) {
+      ctx.addIssue({ code: 'custom', path: ['permittivity'], message: 'give either a material or a permittivity, not both' });
+    }
+  })
+  .describe('the coil form\'s dielectric; default a thin PVC pipe (εr 3.0, 3 mm wall)');
 
 export const wireAwgSchema = z
   .strictObject({
@@ -53,7 +74,16 @@ export const secondarySchema = z.strictObject({
   wire: z.union([wireAwgSchema, wireDiameterSchema], { error: (iss) => (iss.input === undefined ? 'is required' : 'expected { awg, insulation } or { diameter, insulatedDiameter }') }),
   windingLength: quantity('length', b.windingLength, 'length of the winding; default close-wound, turns × insulated diameter').optional(),
   elevation: quantity('length', b.elevation, 'bottom of the winding above the primary reference plane; default 0').optional(),
+  former: formerSchema.nullable().optional(),
 });
+
+export const strikeRailSchema = z
+  .strictObject({
+    diameter: quantity('length', b.railDiameter, 'centre-line diameter of the grounded strike rail'),
+    height: quantity('length', b.elevation, 'height of the rail above the primary reference plane; default 0').optional(),
+    conductorDiameter: quantity('length', b.conductorDiameter, 'diameter of the rail\'s conductor; default 6 mm').optional(),
+  })
+  .describe('a grounded ring around the primary');
 
 export const toroidSchema = z.strictObject({
   shape: z.literal('toroid'),
@@ -145,6 +175,7 @@ export const designInputSchema = z.strictObject({
   secondary: secondarySchema,
   groundClearance: quantity('length', b.groundClearance, 'height of the primary reference plane above the ground; default 0.5 m').optional(),
   topload: toploadSchema.nullable().optional(),
+  strikeRail: strikeRailSchema.nullable().optional(),
   primary: primarySchema.nullable().optional(),
   tank: tankSchema.nullable().optional(),
   supply: supplySchema.nullable().optional(),
@@ -159,5 +190,5 @@ export const KNOWN_FIELDS: readonly string[] = [
   'elevation', 'groundClearance', 'topload', 'shape', 'majorDiameter', 'minorDiameter', 'primary', 'innerDiameter',
   'conductorDiameter', 'spacing', 'angle', 'tank', 'capacitance', 'unitCapacitance', 'unitVoltage', 'series', 'parallel',
   'supply', 'kind', 'voltage', 'current', 'lineFrequency', 'breakRate', 'busVoltage', 'tuning', 'streamerCapacitance',
-  'streamerLength', 'targetCoupling',
+  'streamerLength', 'targetCoupling', 'former', 'material', 'permittivity', 'wallThickness', 'strikeRail', 'height',
 ];
