@@ -125,13 +125,13 @@ export const methodNotes: MethodNote[] = [
     title: 'Secondary self-capacitance',
     gives: 'the self-capacitance of the bare secondary, and whether its aspect ratio lies inside Medhurst’s table',
     formulas: [
-      'C = H(ℓ/D) · D,  C in pF, D in cm  (Medhurst’s table of H, 0.96 pF/cm at ℓ/D = 0.1 down to 0.46 near ℓ/D = 1 and up to 5.22 at ℓ/D = 50)',
+      'C = H(ℓ/D) · D,  C in pF, D in cm  (Medhurst’s table of H, 0.96 pF/cm at ℓ/D = 0.1 down to 0.46 near ℓ/D = 1 and up to 3.40 at ℓ/D = 30; beyond, rising at the long-coil slope 4ε<sub>0</sub>/π, since the remembered rows at 40 and 50 lie below that limit)',
       'H between table entries: shape-preserving monotone cubic (PCHIP, Fritsch–Carlson) in ln(ℓ/D)',
       'cross-check, Knight: C = (4ε<sub>0</sub>ε<sub>x</sub>/π) ℓ [1 + k<sub>c</sub>(1 + ε<sub>i</sub>/ε<sub>x</sub>)/2] / cos²ψ,  k<sub>c</sub> = 0.717439(D/ℓ) + 0.933048(D/ℓ)<sup>3/2</sup> + 0.106(D/ℓ)²',
     ],
     assumptions: [
       'Single-layer solenoid, one end grounded, no topload; the lumped capacitance that resonates with the low-frequency inductance.',
-      'Medhurst measured coils wound on solid polystyrene rods: an air-cored coil comes out a few per cent lower.',
+      'Medhurst measured coils wound on solid polystyrene rods: a coil on a thin pipe comes out 10–30 % lower (Knight 2013), which the field model accounts for with the former\'s permittivity.',
     ],
     range: 'ℓ/D = 0.1–50. Outside it the result is flagged: above 50 H continues along the table’s last straight segment; below 0.1 it is held at 0.96, which underestimates very short coils.',
     accuracy:
@@ -203,7 +203,7 @@ export const methodNotes: MethodNote[] = [
       { text: 'Empirical toroid-topload formula circulating in the trade, without a primary physics source', mark: 'common practice' },
     ],
     notModelled: [
-      'The secondary winding below the topload, which adds capacitance no closed form covers',
+      'The secondary winding below the topload, which shields it and lowers what the two hold together (the field model solves both together; this figure is the topload alone)',
       'Surroundings and nearby objects: walls, ceiling, furniture, people, the strike rail',
       'Streamers and breakout (see tuning)',
       'Ground resistance: the ground plane is a perfect conductor',

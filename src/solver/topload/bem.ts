@@ -252,8 +252,9 @@ const memo = new Map<string, number>();
  *
  * Method: {@link capacitanceAxisymmetricBEM} at its default panel count with a ground image; for a
  * toroid majorDiameter is the overall OUTSIDE diameter, so R = (major − minor)/2 is the tube's
- * centre-line radius and r = minor/2 its radius. The secondary coil, its self-capacitance and nearby
- * objects are not included (they add capacitance no closed form covers). Results are memoised in a
+ * centre-line radius and r = minor/2 its radius. The secondary coil and nearby objects are not included:
+ * the coil shields the topload and lowers what the two hold together below the sum of the parts (the
+ * whole structure is solved in field/structure.ts). Results are memoised in a
  * small bounded module-level map keyed by the exact inputs, so re-solving an unchanged topload is free;
  * the function stays deterministic.
  *
