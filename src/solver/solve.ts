@@ -226,6 +226,7 @@ export function solve(design: DesignSI): Result {
         field: field
           ? {
               ...field.withTopCapacitance(design.tuning.streamerCapacitance),
+              windingCapacitance: field.fieldCapacitance.coilAlone,
               frequencyWithTopCapacitance: field.frequencyWithTopCapacitance,
             }
           : undefined,
