@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { referenceCases } from '../../src/lib/validation/cases';
 import { physicsCases } from '../../src/lib/validation/cases-physics';
+import { FIELD_WINDING_ACCURACY } from '../../src/solver/field/model';
 
 describe('referenceCases', () => {
   it.each(referenceCases.map((c) => [c.id, c] as const))('%s agrees with its reference within tolerance', (_id, c) => {
@@ -20,7 +21,8 @@ describe('referenceCases', () => {
     for (const c of referenceCases) {
       expect(c.source.length).toBeGreaterThan(10);
       expect(c.tolerance).toBeGreaterThan(0);
-      expect(c.tolerance).toBeLessThanOrEqual(0.1);
+      // the field model's self-capacitance rows carry its stated ±30 % against Medhurst's table (field/model.ts)
+      expect(c.tolerance).toBeLessThanOrEqual(c.id.startsWith('field-medhurst-') ? FIELD_WINDING_ACCURACY : 0.1);
     }
     const perQuantity = new Map<string, number>();
     for (const c of physicsCases) perQuantity.set(c.quantity, (perQuantity.get(c.quantity) ?? 0) + 1);
