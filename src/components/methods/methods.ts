@@ -186,7 +186,7 @@ export const methodNotes: MethodNote[] = [
       'C<sub>eff</sub> = V<sup>T</sup> C V / V<sub>top</sub>²,   L<sub>eff</sub> = 1 / (ω<sub>1</sub>² C<sub>eff</sub>)',
     ],
     assumptions: [
-      'Axisymmetric and quasi-static: the winding is a smooth sheet at the wire centres whose voltage is linear within each of 24 sections; the topload is at the top voltage; the ground plane, the primary and a strike rail are grounded.',
+      'Axisymmetric and quasi-static: the winding is a smooth sheet at the wire centres whose voltage is linear within each of 20 sections; the topload is at the top voltage; the ground plane, the primary and a strike rail are grounded.',
       'The former’s dielectric enters as an effective permittivity of the inside (wall and air core in parallel), weighting the inside share of the winding’s field (D. W. Knight’s shape factor); with no former given a 3 mm PVC wall (εr 3.0) is assumed and shown.',
       'The section inductances are the current sheet’s, scaled on the diagonal so that they sum to the secondary’s round-wire inductance.',
     ],

@@ -7,7 +7,7 @@ import { ladderModes, sectionInductanceMatrix, type LadderModes } from './ladder
 import { quadraticForm, structureCapacitance, type StructureDiscretisation, type StructureGeometry } from './structure';
 
 /** Default discretisation: doubling every count changes the loaded frequency by less than 1e-3 (asserted in the tests). */
-export const FIELD_DISCRETISATION: Readonly<StructureDiscretisation> = { sections: 24, windingPanels: 96, toploadPanels: 24 };
+export const FIELD_DISCRETISATION: Readonly<StructureDiscretisation> = { sections: 20, windingPanels: 64, toploadPanels: 20 };
 
 /**
  * Stated accuracy of the field model's effective capacitance for the structure as modelled, relative: ±2 %. The

@@ -4,6 +4,7 @@ import { formatFixed, formatPercent, formatQuantity as q, MISSING, type UnitSyst
 import { SafetyNote } from '~/components/SafetyNote';
 import { Group, Row } from './Row';
 import { TapCallout } from './TapCallout';
+import { FieldModelPanel } from './FieldModelPanel';
 
 type Props = { result: Result; system: UnitSystem; stale?: boolean };
 
@@ -42,7 +43,7 @@ export const ResultsPanel = memo(function ResultsPanel({ result: r, system, stal
             label="Loaded resonant frequency"
             strong
             value={q(r.system.resonantFrequency, 'frequency')}
-            note={band ? <>Likely between {q(band.low, 'frequency', { digits: 3 })} and {q(band.high, 'frequency', { digits: 3 })}: the models' stated accuracy.</> : undefined}
+            note={band && !r.tuning ? <>Likely between {q(band.low, 'frequency', { digits: 3 })} and {q(band.high, 'frequency', { digits: 3 })}{band.nominal !== r.system.resonantFrequency ? ' with the streamer allowance' : ''}: the models' stated accuracy.</> : undefined}
           />
           <Row id="system.totalCapacitance" label="Total capacitance (self + topload)" value={q(r.system.totalCapacitance, 'capacitance')} />
           <Row
@@ -60,12 +61,19 @@ export const ResultsPanel = memo(function ResultsPanel({ result: r, system, stal
         </Group>
       )}
 
+      <FieldModelPanel result={r} system={system} />
+
       {(r.primary || r.tuning) && (
         <Group title="Primary and tap" id="res-primary">
           <dl>
           {r.tuning && (
             <>
-              <Row id="tuning.targetFrequency" label="Tuning target (with streamer allowance)" value={q(r.tuning.targetFrequency, 'frequency')} />
+              <Row
+                id="tuning.targetFrequency"
+                label="Tuning target (with streamer allowance)"
+                value={q(r.tuning.targetFrequency, 'frequency')}
+                note={band ? <>Likely between {q(band.low, 'frequency', { digits: 3 })} and {q(band.high, 'frequency', { digits: 3 })}: the models' stated accuracy.</> : undefined}
+              />
               <Row id="tuning.tapTurns" label="Tap, turns from the inner end" value={r.tuning.tapTurns === null ? 'out of reach' : formatFixed(r.tuning.tapTurns, 2)} />
               <Row id="tuning.primaryFrequencyAllTurns" label="Primary + tank, every turn in circuit" value={q(r.tuning.primaryFrequencyAllTurns, 'frequency')} />
               <Row id="tuning.requiredInductance" label="Primary inductance needed at the tap" value={q(r.tuning.requiredInductance, 'inductance')} />
