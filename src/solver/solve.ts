@@ -78,7 +78,7 @@ export function solve(design: DesignSI): Result {
     secondary = {
       inductance: sv.inductance,
       selfCapacitance: sv.selfCapacitance,
-      resonantFrequency: resonantFrequencyLC(sv.inductance, sv.selfCapacitance),
+      resonantFrequency: field ? field.unloadedFrequency : resonantFrequencyLC(sv.inductance, sv.selfCapacitance),
       wireLength: sv.wireLength,
       windingLength: sv.windingLength,
       aspectRatio: sv.aspectRatio,

@@ -152,7 +152,9 @@ export interface SolverWarning {
 
 export interface SecondaryResult {
   inductance: number;
+  /** Medhurst's table (his coils on solid rods), for comparison and the lumped estimate */
   selfCapacitance: number;
+  /** the winding without topload by the field model (same surroundings) */
   resonantFrequency: number;
   wireLength: number;
   windingLength: number;

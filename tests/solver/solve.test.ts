@@ -81,7 +81,8 @@ describe('solve(design) datums', () => {
     const L = inductanceSolenoidRoundWire(1000, (0.1143 + ins) / 2, 1000 * ins, awgDiameter(24));
     const cs = selfCapacitanceMedhurst(0.1143 + ins, 1000 * ins).capacitance;
     assertClose(r.secondary!.inductance, L, 1e-12, 'L');
-    assertClose(r.secondary!.resonantFrequency, resonantFrequencyLC(L, cs), 1e-12, 'unloaded');
+    // unloaded: the field model's winding alone, within Medhurst-versus-field spread of the lumped value
+    assertClose(r.secondary!.resonantFrequency, resonantFrequencyLC(L, cs), 0.15, 'unloaded');
     assertClose(r.system!.lumpedResonantFrequency, resonantFrequencyLC(L, cs + r.topload!.capacitance), 1e-12, 'lumped');
     assertClose(r.system!.resonantFrequency, r.system!.modes[0], 1e-15, 'loaded = first mode');
     assertClose(r.system!.resonantFrequency, resonantFrequencyLC(r.system!.effectiveInductance, r.system!.effectiveCapacitance), 1e-12, 'effective pair');

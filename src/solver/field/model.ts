@@ -35,6 +35,8 @@ export const FIELD_MODEL_NOTE =
 
 export interface FieldModel {
   modes: number[];
+  /** first mode of the winding alone (no topload) in the same surroundings */
+  unloadedFrequency: number;
   effectiveInductance: number;
   effectiveCapacitance: number;
   voltageProfile: Array<{ height: number; voltage: number }>;
@@ -50,6 +52,7 @@ export interface FieldModel {
 interface Prepared {
   L: Float64Array;
   C: Float64Array;
+  unloadedFrequency: number;
   sections: number;
   nodeHeights: Float64Array;
   fieldCapacitance: FieldCapacitanceResult;
@@ -94,6 +97,7 @@ export function evaluateFieldModel(d: DesignSI, inductance: number, disc: Struct
   const currentProfile = Array.from(base.current, (c, k) => ({ height: 0.5 * (p.nodeHeights[k] + p.nodeHeights[k + 1]) - ground, current: c }));
   return {
     modes: base.omega2.map(toFrequency),
+    unloadedFrequency: p.unloadedFrequency,
     effectiveInductance: base.effectiveInductance,
     effectiveCapacitance: base.effectiveCapacitance,
     voltageProfile,
@@ -124,7 +128,12 @@ function prepare(d: DesignSI, g: StructureGeometry, former: FormerSI, inductance
     interaction: structure - coilAlone - sc.toploadAlone,
   };
   const L = sectionInductanceMatrix(d.secondary.turns, D / 2, len, N, inductance);
-  return { L, C: sc.matrix, sections: N, nodeHeights: sc.nodeZ, fieldCapacitance, former, modes: new Map() };
+  const unloaded = sc.coilAlone === sc.matrix ? null : ladderModes(L, sc.coilAlone, N, 0, 1);
+  const modes = new Map<number, LadderModes>();
+  const first = unloaded ?? ladderModes(L, sc.matrix, N);
+  if (!unloaded) modes.set(0, first);
+  const unloadedFrequency = Math.sqrt(first.omega2[0]) / (2 * Math.PI);
+  return { L, C: sc.matrix, unloadedFrequency, sections: N, nodeHeights: sc.nodeZ, fieldCapacitance, former, modes };
 }
 
 /** The design's structure in the field model's frame: heights above the ground plane. */
