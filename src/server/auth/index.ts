@@ -105,7 +105,7 @@ export function getAuth(): Auth {
       secret: e.BETTER_AUTH_SECRET,
       trustedOrigins: trustedOriginsFor(e.BETTER_AUTH_URL, e.HOST, e.PORT),
       send: sendMail,
-      signInLimit: Number(process.env.COILWRIGHT_AUTH_RATE_LIMIT ?? '') || 10,
+      signInLimit: e.COILWRIGHT_AUTH_RATE_LIMIT,
     });
   }
   return g.__coilwrightAuth;
