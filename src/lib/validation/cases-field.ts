@@ -1,4 +1,5 @@
 import type { ReferenceCase } from './types';
+import { defineCase, q } from './inputs';
 import { parseDesign } from '../design/parse';
 import reference from './fixtures/field-structure.json';
 import type { DesignSI } from '../../solver/types';
@@ -49,7 +50,7 @@ const rod = { material: 'polystyrene' as const, permittivity: FORMER_PERMITTIVIT
 
 /** Reference cases for the whole-resonator field model (src/solver/field). */
 export const fieldCases: ReferenceCase[] = [
-  {
+  defineCase({
     id: 'field-structure-capacitance',
     quantity: 'Whole-structure capacitance (coil + toroid + ground, linear profile)',
     method: 'field-model',
@@ -60,8 +61,8 @@ export const fieldCases: ReferenceCase[] = [
     unit: 'pF',
     tolerance: 5e-3,
     compute: () => fieldOf(designOf('coil-toroid-ground')).fieldCapacitance.structure * 1e12,
-  },
-  {
+  }),
+  defineCase({
     id: 'field-coil-alone-capacitance',
     quantity: 'Winding alone over the ground (linear profile)',
     method: 'field-model',
@@ -72,8 +73,8 @@ export const fieldCases: ReferenceCase[] = [
     unit: 'pF',
     tolerance: 5e-3,
     compute: () => fieldOf(designOf('coil-toroid-ground')).fieldCapacitance.coilAlone * 1e12,
-  },
-  {
+  }),
+  defineCase({
     id: 'field-loaded-frequency',
     quantity: 'Loaded frequency, first mode (coil + toroid + ground)',
     method: 'field-model',
@@ -84,8 +85,8 @@ export const fieldCases: ReferenceCase[] = [
     unit: 'kHz',
     tolerance: 5e-3,
     compute: () => fieldOf(designOf('coil-toroid-ground')).modes[0] / 1e3,
-  },
-  {
+  }),
+  defineCase({
     id: 'field-loaded-frequency-primary',
     quantity: 'Loaded frequency, first mode, with a grounded 16-turn flat primary',
     method: 'field-model',
@@ -96,8 +97,8 @@ export const fieldCases: ReferenceCase[] = [
     unit: 'kHz',
     tolerance: 5e-3,
     compute: () => fieldOf(designOf('coil-toroid-primary-ground')).modes[0] / 1e3,
-  },
-  {
+  }),
+  defineCase({
     id: 'field-convergence',
     quantity: 'Loaded frequency at twice the panels and sections (convergence)',
     method: 'field-model',
@@ -112,65 +113,65 @@ export const fieldCases: ReferenceCase[] = [
     unit: 'kHz',
     tolerance: 1e-3,
     compute: () => fieldOf(designOf('coil-toroid-ground')).modes[0] / 1e3,
-  },
-  {
+  }),
+  defineCase({
     id: 'field-uniform-line',
     quantity: 'Uniform ladder, first mode (30 sections, L = 0.2 mH, C = 0.3 pF each)',
     method: 'field-model',
     source: 'Fixed–free chain of N sections: ω₁² = 4 sin²(π/(2(2N+1)))/(LC) (standard result for a discrete line shorted at one end, open at the other)',
     kind: 'closed-form',
-    inputs: { sections: 30, L: '0.2 mH', C: '0.3 pF' },
+    inputs: { sections: 30, L: q(0.2, 'mH'), C: q(0.3, 'pF') },
     reference: (4 / (2e-4 * 3e-13)) * Math.sin(Math.PI / (2 * 61)) ** 2,
     unit: 'rad²/s²',
     tolerance: 1e-9,
-    compute: () => uniformLine(30, 2e-4, 3e-13)[0],
-  },
-  {
+    compute: (x) => uniformLine(x.sections, x.L, x.C)[0],
+  }),
+  defineCase({
     id: 'field-quarter-wave-limit',
     quantity: 'Uniform ladder of 400 sections against the quarter-wave line',
     method: 'field-model',
     source: 'Telegrapher’s equations: a line shorted at one end resonates at 1/(4√(L C)) with L and C its totals (standard)',
     kind: 'closed-form',
-    inputs: { sections: 400, L: '20 mH', C: '10 pF' },
+    inputs: { sections: 400, L: q(20, 'mH'), C: q(10, 'pF') },
     reference: 1 / (4 * Math.sqrt(0.02 * 1e-11)) / 1e3,
     unit: 'kHz',
     tolerance: 2e-3,
-    compute: () => Math.sqrt(uniformLine(400, 0.02 / 400, 1e-11 / 400)[0]) / (2 * Math.PI) / 1e3,
-  },
-  {
+    compute: (x) => Math.sqrt(uniformLine(x.sections, x.L / x.sections, x.C / x.sections)[0]) / (2 * Math.PI) / 1e3,
+  }),
+  defineCase({
     id: 'field-torus-limit',
     quantity: 'Topload alone in the structure solve: isolated torus',
     method: 'field-model',
     source: 'Toroidal-harmonic series (V. Belevitch & J. Boersma, Philips J. Res. 38, 1983, from memory; DLMF §14.19, confirmed)',
     kind: 'closed-form',
-    inputs: { R: '0.25 m', r: '0.06 m' },
+    inputs: { R: q(0.25, 'm'), r: q(0.06, 'm') },
     reference: capacitanceTorusIsolated(0.25, 0.06) * 1e12,
     unit: 'pF',
     tolerance: 1e-4,
-    compute: () =>
+    compute: (x) =>
       structureCapacitance(
-        { winding: { radius: 0.01, zBottom: 0.1, length: 0.1 }, topload: { kind: 'torus', R: 0.25, r: 0.06, centreZ: 1 }, rings: [], ground: false },
+        { winding: { radius: 0.01, zBottom: 0.1, length: 0.1 }, topload: { kind: 'torus', R: x.R, r: x.r, centreZ: 1 }, rings: [], ground: false },
         { sections: 4, windingPanels: 16, toploadPanels: 24 },
       ).toploadAlone * 1e12,
-  },
-  {
+  }),
+  defineCase({
     id: 'field-sphere-limit',
     quantity: 'Topload alone in the structure solve: sphere over the ground',
     method: 'field-model',
     source: 'Kelvin image series C = 4πε₀a sinh α Σ 1/sinh(nα) (W. R. Smythe, Static and Dynamic Electricity, 3rd ed., 1968, ch. 5, from memory)',
     kind: 'closed-form',
-    inputs: { radius: '0.15 m', centreHeight: '0.6 m' },
+    inputs: { radius: q(0.15, 'm'), centreHeight: q(0.6, 'm') },
     reference: capacitanceSphereOverPlane(0.15, 0.6) * 1e12,
     unit: 'pF',
     tolerance: 1e-4,
-    compute: () =>
+    compute: (x) =>
       structureCapacitance(
-        { winding: { radius: 0.01, zBottom: 0.1, length: 0.1 }, topload: { kind: 'sphere', radius: 0.15, centreZ: 0.6 }, rings: [], ground: true },
+        { winding: { radius: 0.01, zBottom: 0.1, length: 0.1 }, topload: { kind: 'sphere', radius: x.radius, centreZ: x.centreHeight }, rings: [], ground: true },
         { sections: 4, windingPanels: 16, toploadPanels: 24 },
       ).toploadAlone * 1e12,
-  },
-  ...medhurstRows.map(
-    (row): ReferenceCase => ({
+  }),
+  ...medhurstRows.map((row) =>
+    defineCase({
       id: `field-medhurst-ld-${row.lengthOverDiameter}`,
       quantity: `Self-capacitance of an isolated coil on a polystyrene rod, ℓ/D = ${row.lengthOverDiameter}`,
       method: 'field-model',
@@ -178,11 +179,11 @@ export const fieldCases: ReferenceCase[] = [
         `${MEDHURST}. The quasi-static field model is held to its stated ±${FIELD_WINDING_ACCURACY * 100} % here, not Medhurst's ±5 %: ` +
         'it runs high for short coils and low for long ones (the rise that D. W. Knight, 2013, ties to the wave along the helix)',
       kind: 'published-table',
-      inputs: { diameter: '10 cm', length: `${row.lengthOverDiameter * 10} cm`, former: 'solid polystyrene, εr 2.55 (from memory)' },
+      inputs: { diameter: q(10, 'cm'), length: q(row.lengthOverDiameter * 10, 'cm'), former: 'solid polystyrene rod', permittivity: q(FORMER_PERMITTIVITY.polystyrene, '1', { note: 'from memory' }) },
       reference: row.H * 10,
       unit: 'pF',
       tolerance: FIELD_WINDING_ACCURACY,
-      compute: () => isolatedSelfCapacitance(0.1, 0.1 * row.lengthOverDiameter, rod) * 1e12,
+      compute: (x) => isolatedSelfCapacitance(x.diameter, x.length, { ...rod, permittivity: x.permittivity, wallThickness: x.diameter / 2 }) * 1e12,
     }),
   ),
 ];
