@@ -2,6 +2,8 @@
 import { parseDesign } from '../src/lib/design';
 import { solve, sweep } from '../src/solver';
 import type { DesignSI } from '../src/solver';
+import { evaluateFieldModel } from '../src/solver/field/model';
+import { evaluateSecondary } from '../src/solver/system/secondary';
 
 interface Section {
   name: string;
@@ -52,6 +54,21 @@ const sections: Section[] = [
     target: 'for information',
     repeats: 50,
     run: () => void solve({ ...design, groundClearance: 0.5 + 1e-6 * ++n }),
+  },
+  {
+    name: 'field model: 1000-turn secondary, toroid, 12-turn grounded primary, new geometry each run (BEM + ladder + modes)',
+    target: 'median ≤ 30 ms',
+    repeats: 40,
+    run: () => {
+      const d = { ...design, groundClearance: 0.5 + 1e-6 * ++n };
+      void evaluateFieldModel(d, evaluateSecondary(d.secondary).inductance);
+    },
+  },
+  {
+    name: 'field model: same geometry, tank and streamer allowance changed (cached matrices, one small eigenproblem)',
+    target: 'for information',
+    repeats: 200,
+    run: () => void evaluateFieldModel({ ...design, tank: { kind: 'single', capacitance: 1e-8 * (1 + (++n % 7)) } }, evaluateSecondary(design.secondary).inductance).frequencyWithTopCapacitance(1e-12 * (n % 5)),
   },
   {
     name: 'sweep: 200 points of secondary.turns, default series (f, L, C_self, k)',

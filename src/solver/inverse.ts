@@ -8,15 +8,42 @@ import { findRoot } from './system/roots';
 import { capacitanceForResonance } from './tuning/tap';
 import { evaluateTank } from './tank/evaluate';
 import { closeWoundLength, windingLength } from './system/geometry';
+import { evaluateFieldModel } from './field/model';
 
 const MAX_TURNS = 20000;
 const MAX_WINDING_LENGTH = 10;
 
-/** Loaded frequency of a design (secondary + topload + streamer allowance), the quantity the inverses aim at. */
-export function loadedFrequency(d: DesignSI): number {
+/** Lumped estimate of the loaded frequency (Medhurst self-capacitance + topload alone + streamer allowance). */
+export function lumpedLoadedFrequency(d: DesignSI): number {
   const sv = evaluateSecondary(d.secondary);
   const ct = d.topload ? evaluateTopload(d, d.topload).capacitance : 0;
   return resonantFrequencyLC(sv.inductance, sv.selfCapacitance + ct + d.tuning.streamerCapacitance);
+}
+
+/** Loaded frequency of a design (secondary + topload + streamer allowance) by the field model, the quantity the inverses aim at. */
+export function loadedFrequency(d: DesignSI): number {
+  const sv = evaluateSecondary(d.secondary);
+  return evaluateFieldModel(d, sv.inductance).frequencyWithTopCapacitance(d.tuning.streamerCapacitance);
+}
+
+/**
+ * Root of ln f(x) − ln f_target for the field model's f, found cheaply: the field model changes the lumped
+ * estimate by a ratio that varies slowly with any one input, so the lumped model (with the ratio held) is
+ * solved, the ratio is re-evaluated at the answer, and this repeats until the field frequency is within 1e-5.
+ */
+function solveWithFieldRatio(at: (x: number) => DesignSI, targetHz: number, lo: number, hi: number, iterations: number): number | null {
+  let ratio = 1;
+  let x: number | null = null;
+  for (let pass = 0; pass < 6; pass++) {
+    const held = ratio;
+    x = findRoot((u) => Math.log(lumpedLoadedFrequency(at(u)) * held) - Math.log(targetHz), lo, hi, iterations);
+    if (x === null) return null;
+    const d = at(x);
+    const field = loadedFrequency(d);
+    if (Math.abs(field / targetHz - 1) < 1e-5) return x;
+    ratio = field / lumpedLoadedFrequency(d);
+  }
+  return x;
 }
 
 function withSecondary(d: DesignSI, patch: Partial<DesignSI['secondary']>): DesignSI {
@@ -33,8 +60,7 @@ export function turnsForFrequency(d: DesignSI, targetHz: number): { turns: numbe
   const s = d.secondary;
   const maxTurns = s.windingLength === null ? MAX_TURNS : Math.min(MAX_TURNS, s.windingLength / s.wire.insulatedDiameter);
   if (!(maxTurns >= 1)) return null;
-  const g = (lnN: number) => Math.log(loadedFrequency(withSecondary(d, { turns: Math.exp(lnN) }))) - Math.log(targetHz);
-  const lnN = findRoot(g, 0, Math.log(maxTurns), 32);
+  const lnN = solveWithFieldRatio((lnN) => withSecondary(d, { turns: Math.exp(lnN) }), targetHz, 0, Math.log(maxTurns), 32);
   if (lnN === null) return null;
   const turns = Math.exp(lnN);
   return { turns, windingLength: windingLength({ ...s, turns }) };
@@ -47,9 +73,7 @@ export function turnsForFrequency(d: DesignSI, targetHz: number): { turns: numbe
 export function windingLengthForFrequency(d: DesignSI, targetHz: number): number | null {
   const lo = closeWoundLength(d.secondary);
   if (!(lo < MAX_WINDING_LENGTH)) return null;
-  const g = (lnL: number) =>
-    Math.log(loadedFrequency(withSecondary(d, { windingLength: Math.exp(lnL) }))) - Math.log(targetHz);
-  const lnL = findRoot(g, Math.log(lo), Math.log(MAX_WINDING_LENGTH), 40);
+  const lnL = solveWithFieldRatio((lnL) => withSecondary(d, { windingLength: Math.exp(lnL) }), targetHz, Math.log(lo), Math.log(MAX_WINDING_LENGTH), 40);
   return lnL === null ? null : Math.exp(lnL);
 }
 

@@ -31,10 +31,13 @@ import { evaluateResponse } from './response/evaluate';
 import { designWarnings } from './system/design-warnings';
 import { elevationForCoupling } from './inverse';
 import { evaluateUncertainty } from './uncertainty';
+import { evaluateFieldModel, FIELD_MODEL_NOTE } from './field/model';
+import { DEFAULT_FORMER } from './field/former';
 
 export const LUMPED_MODEL_NOTE =
   'Lumped model: the secondary is its low-frequency inductance resonating with its Medhurst self-capacitance ' +
-  'plus the topload capacitance in parallel; distributed (transmission-line) effects are left out.';
+  'plus the topload capacitance computed alone, in parallel; the shielding between coil and topload and ' +
+  'distributed (transmission-line) effects are left out.';
 
 function attempt<T>(label: string, path: string, warnings: SolverWarning[], f: () => T): T | null {
   try {
@@ -64,16 +67,18 @@ export function solve(design: DesignSI): Result {
   let topload: ToploadResult | null = null;
   if (tl) topload = { capacitance: tl.capacitance, centreHeightAboveGround: tl.centreHeightAboveGround, empirical: tl.empirical };
 
+  const field = sv ? attempt('The field model', 'secondary', warnings, () => evaluateFieldModel(design, sv.inductance)) : null;
   if (sv) {
     const totalCapacitance = sv.selfCapacitance + (tl?.capacitance ?? 0);
-    const fLoaded = resonantFrequencyLC(sv.inductance, totalCapacitance);
+    const fLumped = resonantFrequencyLC(sv.inductance, totalCapacitance);
+    const fLoaded = field ? field.modes[0] : fLumped;
     const acResistance = attempt('The AC resistance', 'secondary.wire', warnings, () =>
       acResistanceRoundWire(sv.wireLength, s.wire.diameter, fLoaded),
     );
     secondary = {
       inductance: sv.inductance,
       selfCapacitance: sv.selfCapacitance,
-      resonantFrequency: resonantFrequencyLC(sv.inductance, sv.selfCapacitance),
+      resonantFrequency: field ? field.unloadedFrequency : resonantFrequencyLC(sv.inductance, sv.selfCapacitance),
       wireLength: sv.wireLength,
       windingLength: sv.windingLength,
       aspectRatio: sv.aspectRatio,
@@ -89,10 +94,28 @@ export function solve(design: DesignSI): Result {
     };
     system = {
       resonantFrequency: fLoaded,
+      lumpedResonantFrequency: fLumped,
       quarterWaveFrequency: quarterWaveFrequency(sv.wireLength),
       totalCapacitance,
-      model: LUMPED_MODEL_NOTE,
+      effectiveInductance: field ? field.effectiveInductance : sv.inductance,
+      effectiveCapacitance: field ? field.effectiveCapacitance : totalCapacitance,
+      modes: field ? field.modes : [fLumped],
+      voltageProfile: field ? field.voltageProfile : [],
+      currentProfile: field ? field.currentProfile : [],
+      fieldCapacitance: field ? field.fieldCapacitance : { structure: totalCapacitance, coilAlone: sv.selfCapacitance, toploadAlone: tl?.capacitance ?? 0, interaction: 0 },
+      former: field ? field.former : DEFAULT_FORMER,
+      model: field ? FIELD_MODEL_NOTE : LUMPED_MODEL_NOTE,
     };
+    if (secondary.q !== null && secondary.q < 1) {
+      warnings.push(
+        warning(
+          'q_below_one',
+          'secondary.wire',
+          `The secondary's Q at ${kHz(fLoaded)} is ${secondary.q.toPrecision(2)}, below 1: the winding's resistance swamps its ` +
+            'reactance, so it does not resonate; the coupled response is withheld. Use thicker wire or fewer turns.',
+        ),
+      );
+    }
   }
 
   const p = design.primary;
@@ -106,7 +129,7 @@ export function solve(design: DesignSI): Result {
   const tank = design.tank ? evaluateTank(design.tank, design.supply) : null;
   if (p && pv && sv && tank && system) {
     const streamer = design.tuning.streamerCapacitance;
-    const targetFrequency = resonantFrequencyLC(sv.inductance, system.totalCapacitance + streamer);
+    const targetFrequency = field ? field.frequencyWithTopCapacitance(streamer) : resonantFrequencyLC(sv.inductance, system.totalCapacitance + streamer);
     const requiredInductance = inductanceForResonance(targetFrequency, tank.capacitance);
     const tap = attempt('The tap', 'primary.turns', warnings, () =>
       solveTap((t) => primaryInductanceAtTap(p, t), requiredInductance, minimumTap(p), p.turns),
@@ -169,14 +192,18 @@ export function solve(design: DesignSI): Result {
         mutualInductanceAtTap: atTap?.mutualInductance ?? null,
         elevationForTargetCoupling: elevation,
       };
-      if (tuning && tuning.tapTurns !== null && atTap && inductanceAtTap !== null && tank) {
+      const resonates = secondary?.q === null || secondary?.q === undefined || secondary.q >= 1;
+      if (tuning && tuning.tapTurns !== null && atTap && inductanceAtTap !== null && tank && resonates) {
         const tuned = tuning;
+        const pair = field
+          ? field.withTopCapacitance(tuned.streamerCapacitance)
+          : { effectiveInductance: sv.inductance, effectiveCapacitance: (system?.totalCapacitance ?? 0) + tuned.streamerCapacitance };
         response = attempt('The coupled response', 'primary', warnings, () =>
           evaluateResponse({
             L1: inductanceAtTap,
             C1: tank.capacitance,
-            L2: sv.inductance,
-            C2: (system?.totalCapacitance ?? 0) + tuned.streamerCapacitance,
+            L2: pair.effectiveInductance,
+            C2: pair.effectiveCapacitance,
             k: atTap.k,
           }),
         );
@@ -195,6 +222,13 @@ export function solve(design: DesignSI): Result {
         toploadCapacitance: tl?.capacitance ?? 0,
         streamerCapacitance: design.tuning.streamerCapacitance,
         tankCapacitance: tank?.capacitance ?? null,
+        field: field
+          ? {
+              ...field.withTopCapacitance(design.tuning.streamerCapacitance),
+              windingCapacitance: field.fieldCapacitance.coilAlone,
+              frequencyWithTopCapacitance: field.frequencyWithTopCapacitance,
+            }
+          : undefined,
       }),
     );
   }

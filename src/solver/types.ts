@@ -25,6 +25,30 @@ export interface SecondarySI {
   windingLength: number | null;
   /** bottom of the winding above the primary reference plane */
   elevation: number;
+  /** the coil form's dielectric; absent or null: the default thin PVC pipe (field/former.ts) */
+  former?: FormerSI | null;
+}
+
+export type FormerMaterial = 'air' | 'pvc' | 'acrylic' | 'polyethylene' | 'polystyrene' | 'cardboard';
+
+export interface FormerSI {
+  /** the named material, or null when only a permittivity was given */
+  material: FormerMaterial | null;
+  /** relative permittivity of the form's wall */
+  permittivity: number;
+  /** wall thickness; equal to the form radius for a solid rod */
+  wallThickness: number;
+  /** true when the design named no former and the default was taken */
+  assumed: boolean;
+}
+
+/** A grounded ring around the primary that catches strikes. */
+export interface StrikeRailSI {
+  /** centre-line diameter of the ring */
+  diameter: number;
+  /** height of the ring's centre above the primary reference plane */
+  height: number;
+  conductorDiameter: number;
 }
 
 export interface ToroidSI {
@@ -106,6 +130,8 @@ export interface DesignSI {
   /** height of the primary reference plane above the ground plane */
   groundClearance: number;
   topload: ToploadSI | null;
+  /** absent or null: no strike rail */
+  strikeRail?: StrikeRailSI | null;
   primary: PrimarySI | null;
   tank: TankSI | null;
   supply: SupplySI | null;
@@ -126,7 +152,9 @@ export interface SolverWarning {
 
 export interface SecondaryResult {
   inductance: number;
+  /** Medhurst's table (his coils on solid rods), for comparison and the lumped estimate */
   selfCapacitance: number;
+  /** the winding without topload by the field model (same surroundings) */
   resonantFrequency: number;
   wireLength: number;
   windingLength: number;
@@ -155,11 +183,38 @@ export interface ToploadResult {
 }
 
 export interface SystemResult {
+  /** first mode of the field model (secondary, topload, ground, grounded primary and strike rail solved together) */
   resonantFrequency: number;
+  /** Medhurst self-capacitance + topload computed alone, with the secondary's inductance: the older lumped estimate */
+  lumpedResonantFrequency: number;
   quarterWaveFrequency: number;
   /** self-capacitance + topload, the lumped model's total */
   totalCapacitance: number;
+  /** the lumped pair at the top that resonates at resonantFrequency with the same stored energy at a top voltage */
+  effectiveInductance: number;
+  effectiveCapacitance: number;
+  /** first three mode frequencies of the distributed model, Hz */
+  modes: number[];
+  /** first mode along the winding, heights above the primary reference plane, top voltage = 1 */
+  voltageProfile: Array<{ height: number; voltage: number }>;
+  /** first-mode current along the winding at the section mid-heights, largest = 1 */
+  currentProfile: Array<{ height: number; current: number }>;
+  /** the field model's capacitances for a linear voltage profile (0 at the base, 1 at the top) */
+  fieldCapacitance: FieldCapacitanceResult;
+  /** the former taken for the field model (assumed: true when the design named none) */
+  former: FormerSI;
   model: string;
+}
+
+export interface FieldCapacitanceResult {
+  /** the whole structure: winding with a linear profile and the topload at the top voltage */
+  structure: number;
+  /** the winding alone, same profile and surroundings, no topload */
+  coilAlone: number;
+  /** the topload alone in the same surroundings (ground, primary, strike rail), no winding */
+  toploadAlone: number;
+  /** structure − coilAlone − toploadAlone: negative when the coil and topload shield each other */
+  interaction: number;
 }
 
 export interface PrimaryResult {

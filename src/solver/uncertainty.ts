@@ -6,6 +6,7 @@ import { minimumTap, primaryInductanceAtTap } from './system/primary';
 import { inductanceForResonance, solveTap } from './tuning/tap';
 import { STREAMER_CAPACITANCE_PER_FOOT, STREAMER_CAPACITANCE_PER_FOOT_RANGE } from './tuning/streamer';
 import { SPACE_WOUND_FACTOR } from './system/design-warnings';
+import { FIELD_MODEL_ACCURACY, FIELD_WINDING_ACCURACY } from './field/model';
 
 /** Stated accuracy of each model and measurement the loaded frequency rests on. */
 export const UNCERTAINTY_SOURCES = {
@@ -29,6 +30,18 @@ export interface UncertaintyBase {
   toploadCapacitance: number;
   streamerCapacitance: number;
   tankCapacitance: number | null;
+  /** when given, the band is taken around the field model's loaded frequency instead of the lumped estimate */
+  field?: FieldUncertaintyBase;
+}
+
+export interface FieldUncertaintyBase {
+  /** the equivalent pair at the top, streamer allowance included */
+  effectiveInductance: number;
+  effectiveCapacitance: number;
+  /** the winding's capacitance alone in the same surroundings (linear profile), F */
+  windingCapacitance: number;
+  /** the field model's first mode with this capacitance from the top to ground */
+  frequencyWithTopCapacitance: (extra: number) => number;
 }
 
 export interface UncertaintyOptions {
@@ -43,7 +56,8 @@ export interface UncertaintyOptions {
  */
 export function evaluateUncertainty(d: DesignSI, base: UncertaintyBase, options: UncertaintyOptions = {}): UncertaintyResult {
   const f = (L: number, cs: number, ct: number, cx: number) => resonantFrequencyLC(L, cs + ct + cx);
-  const nominal = f(base.inductance, base.selfCapacitance, base.toploadCapacitance, base.streamerCapacitance);
+  const lumpedNominal = f(base.inductance, base.selfCapacitance, base.toploadCapacitance, base.streamerCapacitance);
+  const nominal = base.field ? base.field.frequencyWithTopCapacitance(base.streamerCapacitance) : lumpedNominal;
   const rel = (x: number) => x / nominal - 1;
   const contributions: UncertaintyContribution[] = [];
   const add = (source: string, description: string, a: number, b: number) => {
@@ -51,6 +65,81 @@ export function evaluateUncertainty(d: DesignSI, base: UncertaintyBase, options:
     const rb = rel(b);
     contributions.push({ source, description, relLow: Math.min(ra, rb, 0), relHigh: Math.max(ra, rb, 0) });
   };
+  if (base.field) fieldContributions(d, base, base.field, nominal, lumpedNominal, add, options);
+  else lumpedContributions(d, base, f, add, options);
+  return combine(d, base, nominal, contributions);
+}
+
+type Add = (source: string, description: string, a: number, b: number) => void;
+
+function fieldContributions(d: DesignSI, base: UncertaintyBase, field: FieldUncertaintyBase, nominal: number, lumpedNominal: number, add: Add, options: UncertaintyOptions): void {
+  const u = FIELD_MODEL_ACCURACY;
+  add(
+    'fieldModel',
+    `Field model ±${pct(u)} on the effective capacitance: the winding as a smooth sheet, an ideal ground plane, nothing else in the room (judgement)`,
+    nominal / Math.sqrt(1 + u),
+    nominal / Math.sqrt(1 - u),
+  );
+  if (field.windingCapacitance > 0) {
+    const w = FIELD_WINDING_ACCURACY * field.windingCapacitance;
+    const C = field.effectiveCapacitance;
+    add(
+      'windingCapacitance',
+      `Winding's own capacitance ±${pct(FIELD_WINDING_ACCURACY)}: the quasi-static field model against Medhurst's measured table ` +
+        '(R. G. Medhurst, Wireless Engineer 24, 1947; −11 % to +26 % over ℓ/D 1–5)',
+      nominal * Math.sqrt(C / (C + w)),
+      nominal * Math.sqrt(C / Math.max(C - w, 0.5 * C)),
+    );
+  }
+  const sv = evaluateSecondary(d.secondary);
+  const spaceWound = sv.pitch > SPACE_WOUND_FACTOR * d.secondary.wire.insulatedDiameter;
+  const lLow = UNCERTAINTY_SOURCES.inductanceCloseWound;
+  const lHigh = spaceWound ? UNCERTAINTY_SOURCES.inductanceSpaceWoundHigh : UNCERTAINTY_SOURCES.inductanceCloseWound;
+  add(
+    'inductance',
+    spaceWound
+      ? 'Secondary inductance −0.5 %/+5 %: space-wound coils measure above the current-sheet value (builders\' reports, Tesla Coil Mailing List, 1999)'
+      : 'Secondary inductance ±0.5 %: current sheet with Rosa corrections, helicity neglected (from memory)',
+    nominal / Math.sqrt(1 + lHigh),
+    nominal / Math.sqrt(1 - lLow),
+  );
+  if (base.toploadCapacitance > 0) {
+    const delta = UNCERTAINTY_SOURCES.toploadSurroundings * base.toploadCapacitance;
+    const C = field.effectiveCapacitance;
+    add(
+      'toploadSurroundings',
+      'Topload capacitance ±5 %: nearby objects and the room, which the ground-plane model leaves out (common practice)',
+      nominal * Math.sqrt(C / (C + delta)),
+      nominal * Math.sqrt(C / Math.max(C - delta, 0.5 * C)),
+    );
+  }
+  if (base.streamerCapacitance > 0) {
+    const lo = STREAMER_CAPACITANCE_PER_FOOT_RANGE.low / STREAMER_CAPACITANCE_PER_FOOT;
+    const hi = STREAMER_CAPACITANCE_PER_FOOT_RANGE.high / STREAMER_CAPACITANCE_PER_FOOT;
+    add(
+      'streamerAllowance',
+      'Streamer allowance 0.8–2 pF per foot instead of 1 pF per foot (T. Fritz, Tesla Coil Mailing List, 2002 and 2005; common practice)',
+      field.frequencyWithTopCapacitance(base.streamerCapacitance * lo),
+      field.frequencyWithTopCapacitance(base.streamerCapacitance * hi),
+    );
+  }
+  // The form diameter's effect is taken from the lumped model's relative change (re-solving the field model
+  // for each end would triple its cost on every geometry change).
+  const tol = options.formDiameterTolerance ?? UNCERTAINTY_SOURCES.formDiameter;
+  const atForm = (delta: number) => {
+    const v = evaluateSecondary({ ...d.secondary, formDiameter: d.secondary.formDiameter + delta });
+    return (nominal * resonantFrequencyLC(v.inductance, v.selfCapacitance + base.toploadCapacitance + base.streamerCapacitance)) / lumpedNominal;
+  };
+  add('formDiameter', `Form diameter measured to ±${(tol * 1000).toFixed(1)} mm`, atForm(-tol), atForm(tol));
+}
+
+function lumpedContributions(
+  d: DesignSI,
+  base: UncertaintyBase,
+  f: (L: number, cs: number, ct: number, cx: number) => number,
+  add: Add,
+  options: UncertaintyOptions,
+): void {
 
   const sv = evaluateSecondary(d.secondary);
   const medhurst = UNCERTAINTY_SOURCES.selfCapacitance * (sv.selfCapacitanceInRange ? 1 : 2);
@@ -100,7 +189,9 @@ export function evaluateUncertainty(d: DesignSI, base: UncertaintyBase, options:
     return f(v.inductance, v.selfCapacitance, base.toploadCapacitance, base.streamerCapacitance);
   };
   add('formDiameter', `Form diameter measured to ±${(tol * 1000).toFixed(1)} mm`, atForm(-tol), atForm(tol));
+}
 
+function combine(d: DesignSI, base: UncertaintyBase, nominal: number, contributions: UncertaintyContribution[]): UncertaintyResult {
   const down = Math.sqrt(contributions.reduce((a, c) => a + c.relLow * c.relLow, 0));
   const up = Math.sqrt(contributions.reduce((a, c) => a + c.relHigh * c.relHigh, 0));
   const low = nominal * (1 - down);
@@ -121,6 +212,7 @@ export function evaluateUncertainty(d: DesignSI, base: UncertaintyBase, options:
     loadedFrequency: { nominal, low, high, contributions },
     tapTurns,
     method:
+      (base.field ? 'Around the field model\'s loaded frequency (streamer allowance included). ' : '') +
       'Each source is moved to the ends of its stated range on its own; the changes are combined by root-sum-square on each side. ' +
       'The tap range adds the primary inductance model spread (±1.5 %) in quadrature.',
   };

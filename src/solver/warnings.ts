@@ -23,6 +23,7 @@ export const WARNING_CODES = {
   frequency_high_for_solid_state: 'loaded frequency above 500 kHz with a solid-state supply (usual range 35–500 kHz)',
   break_rate_assumed: 'no break rate given: twice the line frequency assumed',
   value_not_finite: 'a computed value was not finite and was left out',
+  q_below_one: "the secondary's Q is below 1: it does not resonate, coupled results are withheld",
   computation_failed: 'a part of the result could not be computed',
 } as const;
 

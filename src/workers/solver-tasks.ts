@@ -70,7 +70,7 @@ export function exchangeCurve(r: Result): ExchangeCurve | null {
   const L1 = r.primary?.inductanceAtTap ?? null;
   const k = r.coupling?.kAtTap ?? null;
   if (L1 === null || k === null || !r.tank || !r.secondary || !r.system || !r.tuning || !(k > 0)) return null;
-  const pair = { L1, C1: r.tank.capacitance, L2: r.secondary.inductance, C2: r.system.totalCapacitance + r.tuning.streamerCapacitance, k };
+  const pair = { L1, C1: r.tank.capacitance, L2: r.system.effectiveInductance, C2: r.system.effectiveCapacitance + r.tuning.streamerCapacitance, k };
   const t1 = r.response?.transferTime ?? null;
   // two transfers there and back; a very loose pair would need too many cycles to show
   if (t1 === null || 2 * r.response!.f0 * t1 > 400) return null;

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { unit } from 'mathjs';
 import { referenceCases } from '../../src/lib/validation/cases';
 import { physicsCases } from '../../src/lib/validation/cases-physics';
+import { FIELD_WINDING_ACCURACY } from '../../src/solver/field/model';
 import { assertClose } from '../helpers/assertClose';
 import { defineCase, q } from '../../src/lib/validation/inputs';
 
@@ -16,7 +17,8 @@ describe('referenceCases', () => {
     for (const c of referenceCases) {
       expect(c.source.length).toBeGreaterThan(10);
       expect(c.tolerance).toBeGreaterThan(0);
-      expect(c.tolerance).toBeLessThanOrEqual(0.1);
+      // the field model's self-capacitance rows carry its stated ±30 % against Medhurst's table (field/model.ts)
+      expect(c.tolerance).toBeLessThanOrEqual(c.id.startsWith('field-medhurst-') ? FIELD_WINDING_ACCURACY : 0.1);
     }
     const perQuantity = new Map<string, number>();
     for (const c of physicsCases) perQuantity.set(c.quantity, (perQuantity.get(c.quantity) ?? 0) + 1);

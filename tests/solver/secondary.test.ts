@@ -1,10 +1,11 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { C_0, MU_0 } from '../../src/solver/constants';
+import { C_0, EPSILON_0, MU_0 } from '../../src/solver/constants';
 import { mutualInductanceLoops } from '../../src/solver/primary/inductance';
 import {
   MEDHURST_ACCURACY,
   MEDHURST_TABLE,
+  LONG_COIL_SLOPE,
   selfCapacitanceKnight,
   selfCapacitanceMedhurst,
 } from '../../src/solver/secondary/capacitance';
@@ -17,6 +18,9 @@ import {
   rosaCorrection,
   rosaCorrectionA,
   rosaCorrectionB,
+  inductanceSecondary,
+  inductanceRingSum,
+  ROSA_PITCH_LIMIT,
 } from '../../src/solver/secondary/inductance';
 import { qualityFactor, quarterWaveFrequency, resonantFrequencyLC } from '../../src/solver/secondary/resonance';
 import { assertClose } from '../helpers/assertClose';
@@ -182,13 +186,24 @@ describe('selfCapacitanceMedhurst', () => {
     }
   });
 
-  it('selfCapacitanceMedhurst(D, ℓ) flags and extrapolates outside ℓ/D = 0.1…50', () => {
+  it('selfCapacitanceMedhurst(D, ℓ) flags and extrapolates outside ℓ/D = 0.1…30', () => {
     const short = selfCapacitanceMedhurst(0.1, 0.005);
     expect(short.inRange).toBe(false);
     assertClose(short.capacitance, 0.96e-12 * 10, 1e-12, 'held at H(0.1)');
     const long = selfCapacitanceMedhurst(0.01, 0.6);
     expect(long.inRange).toBe(false);
-    assertClose(long.capacitance, (5.22 + 0.09 * 10) * 1e-12, 1e-9, 'continued at 0.09 pF/cm per unit ℓ/D');
+    assertClose(long.capacitance, (3.4 + LONG_COIL_SLOPE * 30) * 1e-12, 1e-9, 'continued from H(30) at the long-coil slope 4ε0/π');
+    expect(selfCapacitanceMedhurst(0.01, 0.3).inRange).toBe(true);
+    expect(selfCapacitanceMedhurst(0.01, 0.31).inRange).toBe(false);
+  });
+
+  it('selfCapacitanceMedhurst(D, ℓ) never falls below the long-coil limit 4ε0ℓ/π for ℓ/D ≥ 10 (Knight 2013, §2 asymptote)', () => {
+    for (const x of [10, 20, 30, 40, 50, 100, 400]) {
+      const D = 0.05;
+      const { capacitance } = selfCapacitanceMedhurst(D, x * D);
+      expect(capacitance, `ℓ/D = ${x}`).toBeGreaterThan(((4 * EPSILON_0) / Math.PI) * x * D);
+    }
+    assertClose(LONG_COIL_SLOPE, 0.112734, 1e-5, '4ε0/π in pF/cm');
     expect(MEDHURST_ACCURACY).toBe(0.05);
   });
 
@@ -219,5 +234,31 @@ describe('resonantFrequencyLC', () => {
     assertClose(quarterWaveFrequency(299.792458), C_0 / (4 * 299.792458), 1e-15, 'quarter wave');
     assertClose(qualityFactor(1e-3, 10, 1e5), (2 * Math.PI * 1e5 * 1e-3) / 10, 1e-15, 'Q');
     expect(() => resonantFrequencyLC(0, 1)).toThrow(RangeError);
+  });
+});
+
+describe('inductanceSecondary: Rosa only where the pitch is small against the radius', () => {
+  it('one turn on a 10 m winding length is one loop, μ0r[ln(8r/a) − 2] (Kirchhoff HF loop; REFERENCES c2)', () => {
+    const r = 0.05;
+    const d = 0.001;
+    const got = inductanceSecondary(1, r, 10, d);
+    expect(got.method).toBe('ringSum');
+    assertClose(got.inductance, MU_0 * r * (Math.log((8 * r) / (d / 2)) - 2), 1e-12, 'single loop');
+  });
+  it('5 turns of 12 mm wire at 0.4 m pitch: the ring sum of Maxwell mutuals (Maxwell 1873, art. 701)', () => {
+    const r = 0.3;
+    const got = inductanceSecondary(5, r, 2, 0.012);
+    expect(got.method).toBe('ringSum');
+    let sum = 5 * MU_0 * r * (Math.log((8 * r) / 0.006) - 2);
+    for (let i = 0; i < 5; i++) for (let j = 0; j < 5; j++) if (i !== j) sum += mutualInductanceLoops(r, r, Math.abs(i - j) * 0.4);
+    assertClose(got.inductance, sum, 1e-12, 'ring sum');
+  });
+  it('close-wound keeps Rosa, and at the limit both methods agree within 0.1 % (REFERENCES a3: 0.02 % at p = 0.085 r)', () => {
+    expect(inductanceSecondary(1000, 0.057, 0.564, 0.0005).method).toBe('rosa');
+    const r = 0.15;
+    const p = ROSA_PITCH_LIMIT * r;
+    const rosa = inductanceSolenoidRoundWire(12, r, 12 * p, 0.00635);
+    const rings = inductanceRingSum(12, r, p, 0.00635);
+    assertClose(rosa, rings, 1e-3, 'Rosa vs ring sum at the switch-over');
   });
 });

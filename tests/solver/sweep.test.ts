@@ -20,13 +20,13 @@ describe('sweep(design, path, from, to, points)', () => {
     for (const k of ['resonantFrequency', 'inductance', 'selfCapacitance', 'k'] as const) expect(s.series[k]!.length).toBe(200);
   });
 
-  it('agrees with solve() at each point (topload interpolated within 1e-5 between exact evaluations)', () => {
+  it('agrees with solve() at each point (topload within 1e-5, field-model ratio within 2e-4 between exact evaluations)', () => {
     const s = sweep(d, 'secondary.turns', 600, 1400, 41);
     for (const i of [0, 7, 20, 33, 40]) {
       const r = solve({ ...d, secondary: { ...d.secondary, turns: s.values[i] } });
       assertClose(s.series.inductance![i]!, r.secondary!.inductance, 1e-12, `L at N=${s.values[i]}`);
       assertClose(s.series.selfCapacitance![i]!, r.secondary!.selfCapacitance, 1e-12, `C at N=${s.values[i]}`);
-      assertClose(s.series.resonantFrequency![i]!, r.system!.resonantFrequency, 1e-5, `f at N=${s.values[i]}`);
+      assertClose(s.series.resonantFrequency![i]!, r.system!.resonantFrequency, 2e-4, `f at N=${s.values[i]}`);
       assertClose(s.series.k![i]!, r.coupling!.k, 1e-12, `k at N=${s.values[i]}`);
     }
   });

@@ -11,11 +11,38 @@ function si(input: DesignInput): DesignSI {
 const medium = exampleDesigns.find((e) => e.id === 'sign-transformer-toroid')!.design;
 
 describe('evaluateUncertainty(design, base)', () => {
-  it('moves a bare coil by −2.41 %/+2.60 % for Medhurst ±5 % (f ∝ C^−½; Medhurst 1947 accuracy)', () => {
-    const r = solve(si({ secondary: medium.secondary }));
-    const c = r.uncertainty!.loadedFrequency.contributions.find((x) => x.source === 'selfCapacitance')!;
+  it('lumped base: moves a bare coil by −2.41 %/+2.60 % for Medhurst ±5 % (f ∝ C^−½; Medhurst 1947 accuracy)', () => {
+    const d = si({ secondary: medium.secondary });
+    const r = solve(d);
+    const u = evaluateUncertainty(d, {
+      inductance: r.secondary!.inductance,
+      selfCapacitance: r.secondary!.selfCapacitance,
+      toploadCapacitance: 0,
+      streamerCapacitance: 0,
+      tankCapacitance: null,
+    });
+    const c = u.loadedFrequency.contributions.find((x) => x.source === 'selfCapacitance')!;
     assertClose(c.relLow, 1 / Math.sqrt(1.05) - 1, 1e-9, 'low');
     assertClose(c.relHigh, 1 / Math.sqrt(0.95) - 1, 1e-9, 'high');
+    assertClose(u.loadedFrequency.nominal, r.system!.lumpedResonantFrequency, 1e-12, 'lumped nominal');
+  });
+
+  it('field model: moves a bare coil by −0.99 %/+1.02 % for ±2 % on the effective capacitance (its stated accuracy)', () => {
+    const r = solve(si({ secondary: medium.secondary }));
+    const c = r.uncertainty!.loadedFrequency.contributions.find((x) => x.source === 'fieldModel')!;
+    assertClose(c.relLow, 1 / Math.sqrt(1.02) - 1, 1e-9, 'low');
+    assertClose(c.relHigh, 1 / Math.sqrt(0.98) - 1, 1e-9, 'high');
+    assertClose(r.uncertainty!.loadedFrequency.nominal, r.system!.resonantFrequency, 1e-12, 'nominal is the field model');
+  });
+
+  it('centres the band on the tuning target (streamer allowance included) and always contains it', () => {
+    for (const ex of exampleDesigns) {
+      const r = solve(si(ex.design));
+      const u = r.uncertainty!.loadedFrequency;
+      assertClose(u.nominal, r.tuning?.targetFrequency ?? r.system!.resonantFrequency, 1e-12, ex.id);
+      expect(u.low).toBeLessThan(u.nominal);
+      expect(u.high).toBeGreaterThan(u.nominal);
+    }
   });
 
   it('moves ±0.5 % inductance by f ∝ L^−½', () => {
@@ -26,18 +53,17 @@ describe('evaluateUncertainty(design, base)', () => {
 
   it('lists topload and streamer sources only when they are present', () => {
     const bare = solve(si({ secondary: medium.secondary })).uncertainty!.loadedFrequency.contributions.map((c) => c.source);
-    expect(bare).toEqual(['selfCapacitance', 'inductance', 'formDiameter']);
+    expect(bare).toEqual(['fieldModel', 'windingCapacitance', 'inductance', 'formDiameter']);
     const full = solve(si(medium)).uncertainty!.loadedFrequency.contributions.map((c) => c.source);
-    expect(full).toEqual(['selfCapacitance', 'inductance', 'toploadSurroundings', 'streamerAllowance', 'formDiameter']);
+    expect(full).toEqual(['fieldModel', 'windingCapacitance', 'inductance', 'toploadSurroundings', 'streamerAllowance', 'formDiameter']);
   });
 
   it('spans the streamer allowance from 0.8 to 2 pF per foot (T. Fritz, Tesla Coil Mailing List, 2005; Spark Discharge, CRC Press; common practice)', () => {
     const d = si(medium);
     const r = solve(d);
     const s = r.uncertainty!.loadedFrequency.contributions.find((x) => x.source === 'streamerAllowance')!;
-    const L = r.secondary!.inductance;
-    const C = r.system!.totalCapacitance;
-    const f = (cx: number) => 1 / (2 * Math.PI * Math.sqrt(L * (C + cx)));
+    // the field model re-solved with the allowance at each end of its range
+    const f = (cx: number) => solve({ ...d, tuning: { ...d.tuning, streamerCapacitance: cx } }).tuning!.targetFrequency;
     assertClose(s.relLow, f(6e-12) / f(3e-12) - 1, 1e-9, 'at 2 pF/ft');
     assertClose(s.relHigh, f(2.4e-12) / f(3e-12) - 1, 1e-9, 'at 0.8 pF/ft');
   });

@@ -125,13 +125,13 @@ export const methodNotes: MethodNote[] = [
     title: 'Secondary self-capacitance',
     gives: 'the self-capacitance of the bare secondary, and whether its aspect ratio lies inside Medhurst’s table',
     formulas: [
-      'C = H(ℓ/D) · D,  C in pF, D in cm  (Medhurst’s table of H, 0.96 pF/cm at ℓ/D = 0.1 down to 0.46 near ℓ/D = 1 and up to 5.22 at ℓ/D = 50)',
+      'C = H(ℓ/D) · D,  C in pF, D in cm  (Medhurst’s table of H, 0.96 pF/cm at ℓ/D = 0.1 down to 0.46 near ℓ/D = 1 and up to 3.40 at ℓ/D = 30; beyond, rising at the long-coil slope 4ε<sub>0</sub>/π, since the remembered rows at 40 and 50 lie below that limit)',
       'H between table entries: shape-preserving monotone cubic (PCHIP, Fritsch–Carlson) in ln(ℓ/D)',
       'cross-check, Knight: C = (4ε<sub>0</sub>ε<sub>x</sub>/π) ℓ [1 + k<sub>c</sub>(1 + ε<sub>i</sub>/ε<sub>x</sub>)/2] / cos²ψ,  k<sub>c</sub> = 0.717439(D/ℓ) + 0.933048(D/ℓ)<sup>3/2</sup> + 0.106(D/ℓ)²',
     ],
     assumptions: [
       'Single-layer solenoid, one end grounded, no topload; the lumped capacitance that resonates with the low-frequency inductance.',
-      'Medhurst measured coils wound on solid polystyrene rods: an air-cored coil comes out a few per cent lower.',
+      'Medhurst measured coils wound on solid polystyrene rods: a coil on a thin pipe comes out 10–30 % lower (Knight 2013), which the field model accounts for with the former\'s permittivity.',
     ],
     range: 'ℓ/D = 0.1–50. Outside it the result is flagged: above 50 H continues along the table’s last straight segment; below 0.1 it is held at 0.96, which underestimates very short coils.',
     accuracy:
@@ -174,6 +174,40 @@ export const methodNotes: MethodNote[] = [
     notModelled: ['Transmission-line (distributed) behaviour of the secondary', 'Streamer loading (see tuning)', 'Nearby objects, people and walls, which shift the resonance'],
   },
   {
+    id: 'field-model',
+    aliases: ['loaded-frequency', 'distributed-model'],
+    title: 'The whole resonator: field model and loaded frequency',
+    gives:
+      'the loaded frequency (and so the tuning target and the tap), the first three modes, the voltage along the winding, the equivalent inductance and capacitance at the top, and how much the coil and topload shield each other',
+    formulas: [
+      'q = P<sup>−1</sup> B V,   C = B<sup>T</sup> diag(w) P<sup>−1</sup> B   (panel potentials P with ground images; B maps node voltages to panels)',
+      'M<sub>ij</sub> = ½[G(z<sub>4</sub>−z<sub>1</sub>) + G(z<sub>3</sub>−z<sub>2</sub>) − G(z<sub>3</sub>−z<sub>1</sub>) − G(z<sub>4</sub>−z<sub>2</sub>)]   (G: Lorenz sheet inductance)',
+      '(D<sup>T</sup> L<sup>−1</sup> D) V = ω² C V',
+      'C<sub>eff</sub> = V<sup>T</sup> C V / V<sub>top</sub>²,   L<sub>eff</sub> = 1 / (ω<sub>1</sub>² C<sub>eff</sub>)',
+    ],
+    assumptions: [
+      'Axisymmetric and quasi-static: the winding is a smooth sheet at the wire centres whose voltage is linear within each of 20 sections; the topload is at the top voltage; the ground plane, the primary and a strike rail are grounded.',
+      'The former’s dielectric enters as an effective permittivity of the inside (wall and air core in parallel), weighting the inside share of the winding’s field (D. W. Knight’s shape factor); with no former given a 3 mm PVC wall (εr 3.0) is assumed and shown.',
+      'The section inductances are the current sheet’s, scaled on the diagonal so that they sum to the secondary’s round-wire inductance.',
+    ],
+    range: 'Any buildable design; the topload must clear the winding and the ground.',
+    accuracy:
+      'Converged to < 1e-3 in frequency and within 1e-4 of an independent scipy solve. Against Medhurst’s measured bare coils the winding’s own capacitance runs from +26 % (ℓ/D = 1) to −11 % (ℓ/D = 5): the band carries ±30 % on the winding’s share and ±2 % on the whole.',
+    references: [
+      { text: 'H. Singer, H. Steinbigler & P. Weiss, "A charge simulation method for the calculation of high voltage fields", IEEE Trans. PAS-93 (1974) 1660–1668', mark: 'from memory' },
+      { text: 'J. F. Corum & K. L. Corum, "RF coils, helical resonators and voltage magnification by coherent spatial modes" (IEEE conference paper, 2001): the secondary as a loaded helical line', mark: 'from memory' },
+      { text: 'D. W. Knight, "The self-resonance and self-capacitance of solenoid coils", v0.04 (2013): the former’s permittivity and Medhurst’s rods', mark: 'confirmed, summary page' },
+      { text: 'R. G. Medhurst, Wireless Engineer 24 (1947): measured self-capacitance, ℓ/D 1–5', mark: 'confirmed, secondary' },
+      { text: 'Independent whole-structure solve with scipy, numpy and mpmath (scripts/fixtures/field_structure.py)', mark: 'confirmed numerically' },
+    ],
+    notModelled: [
+      'Retardation along the helix (the wave effect that makes long bare coils hold more than the quasi-static model gives)',
+      'Walls, ceiling, people and other objects; the ground plane is infinite and perfect',
+      'The pitch of the winding (a helix, not a sheet) and the wire’s own surface',
+      'Losses: the modes are those of the lossless structure',
+    ],
+  },
+  {
     id: 'topload-capacitance',
     aliases: [],
     title: 'Topload capacitance',
@@ -203,7 +237,7 @@ export const methodNotes: MethodNote[] = [
       { text: 'Empirical toroid-topload formula circulating in the trade, without a primary physics source', mark: 'common practice' },
     ],
     notModelled: [
-      'The secondary winding below the topload, which adds capacitance no closed form covers',
+      'The secondary winding below the topload, which shields it and lowers what the two hold together (the field model solves both together; this figure is the topload alone)',
       'Surroundings and nearby objects: walls, ceiling, furniture, people, the strike rail',
       'Streamers and breakout (see tuning)',
       'Ground resistance: the ground plane is a perfect conductor',

@@ -3,13 +3,16 @@ import { awgDiameter } from '../../solver/wire/awg';
 import { insulatedDiameter } from '../../solver/wire/insulation';
 import { checkDesign } from '../../solver/system/checks';
 import { streamerCapacitanceForLength } from '../../solver/tuning/streamer';
-import type { DesignIssue, DesignSI, PrimarySI, SupplySI, TankSI, ToploadSI } from '../../solver/types';
+import type { DesignIssue, DesignSI, FormerSI, PrimarySI, StrikeRailSI, SupplySI, TankSI, ToploadSI } from '../../solver/types';
+import { DEFAULT_FORMER, FORMER_PERMITTIVITY } from '../../solver/field/former';
 import { si } from './fields';
 import { designInputSchema, KNOWN_FIELDS, type DesignInput } from './schema';
 
 export type { DesignSI, DesignIssue };
 
 export const DEFAULT_GROUND_CLEARANCE = 0.5;
+/** Strike-rail conductor when none is given: 6 mm (a heavy ground wire; an assumption, stated in the field's description). */
+export const DEFAULT_RAIL_CONDUCTOR = 6e-3;
 
 export type ParseDesignResult =
   | { ok: true; design: DesignSI; input: DesignInput }
@@ -96,6 +99,24 @@ export function toDesignSI(d: DesignInput): DesignSI {
         : { kind: 'solid-state', busVoltage: si(d.supply.busVoltage, 'voltage') };
   }
 
+  const f = s.former;
+  const former: FormerSI | null = f
+    ? {
+        material: f.material ?? (f.permittivity === undefined ? 'pvc' : null),
+        permittivity: f.permittivity ?? FORMER_PERMITTIVITY[f.material ?? 'pvc'],
+        wallThickness: f.wallThickness === undefined ? DEFAULT_FORMER.wallThickness : si(f.wallThickness, 'length'),
+        assumed: false,
+      }
+    : null;
+  const r = d.strikeRail;
+  const strikeRail: StrikeRailSI | null = r
+    ? {
+        diameter: si(r.diameter, 'length'),
+        height: r.height === undefined ? 0 : si(r.height, 'length'),
+        conductorDiameter: r.conductorDiameter === undefined ? DEFAULT_RAIL_CONDUCTOR : si(r.conductorDiameter, 'length'),
+      }
+    : null;
+
   const t = d.tuning ?? {};
   const streamerLength = t.streamerLength === undefined ? null : si(t.streamerLength, 'length');
   const streamerCapacitance =
@@ -112,7 +133,9 @@ export function toDesignSI(d: DesignInput): DesignSI {
       wire,
       windingLength: s.windingLength === undefined ? null : si(s.windingLength, 'length'),
       elevation: s.elevation === undefined ? 0 : si(s.elevation, 'length'),
+      former,
     },
+    strikeRail,
     groundClearance: d.groundClearance === undefined ? DEFAULT_GROUND_CLEARANCE : si(d.groundClearance, 'length'),
     topload,
     primary,

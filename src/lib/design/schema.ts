@@ -12,6 +12,24 @@ export const designNameSchema = z
     if (message) ctx.addIssue({ code: 'custom', message });
   });
 
+export const FORMER_MATERIALS = ['air', 'pvc', 'acrylic', 'polyethylene', 'polystyrene', 'cardboard'] as const;
+
+export const formerSchema = z
+  .strictObject({
+    material: z
+      .enum(FORMER_MATERIALS, { error: () => `expected one of ${FORMER_MATERIALS.map((m) => `"${m}"`).join(', ')}` })
+      .describe(designField('secondary.former.material').help)
+      .optional(),
+    permittivity: numberField('secondary.former.permittivity').optional(),
+    wallThickness: quantityField('secondary.former.wallThickness').optional(),
+  })
+  .superRefine((f, ctx) => {
+    if (f.material !== undefined && f.permittivity !== undefined) {
+      ctx.addIssue({ code: 'custom', path: ['permittivity'], message: 'give either a material or a permittivity, not both' });
+    }
+  })
+  .describe("the coil form's dielectric; default a thin PVC pipe (εr 3.0, 3 mm wall)");
+
 export const wireAwgSchema = z
   .strictObject({
     awg: numberField('secondary.wire.awg'),
@@ -34,7 +52,16 @@ export const secondarySchema = z.strictObject({
   wire: z.union([wireAwgSchema, wireDiameterSchema], { error: (iss) => (iss.input === undefined ? 'is required' : 'expected { awg, insulation } or { diameter, insulatedDiameter }') }),
   windingLength: quantityField('secondary.windingLength').optional(),
   elevation: quantityField('secondary.elevation').optional(),
+  former: formerSchema.nullable().optional(),
 });
+
+export const strikeRailSchema = z
+  .strictObject({
+    diameter: quantityField('strikeRail.diameter'),
+    height: quantityField('strikeRail.height').optional(),
+    conductorDiameter: quantityField('strikeRail.conductorDiameter').optional(),
+  })
+  .describe('a grounded ring around the primary');
 
 export const toroidSchema = z.strictObject({
   shape: z.literal('toroid'),
@@ -126,6 +153,7 @@ export const designInputSchema = z.strictObject({
   secondary: secondarySchema,
   groundClearance: quantityField('groundClearance').optional(),
   topload: toploadSchema.nullable().optional(),
+  strikeRail: strikeRailSchema.nullable().optional(),
   primary: primarySchema.nullable().optional(),
   tank: tankSchema.nullable().optional(),
   supply: supplySchema.nullable().optional(),

@@ -19,22 +19,32 @@ export const MEDHURST_TABLE: ReadonlyArray<{ lengthOverDiameter: number; H: numb
 /** Medhurst's claimed accuracy of his formula and table (relative, about 5 %). */
 export const MEDHURST_ACCURACY = 0.05;
 
-const lnX = MEDHURST_TABLE.map((row) => Math.log(row.lengthOverDiameter));
-const interpolateH = pchip(lnX, MEDHURST_TABLE.map((row) => row.H));
-const first = MEDHURST_TABLE[0];
-const last = MEDHURST_TABLE[MEDHURST_TABLE.length - 1];
-const beforeLast = MEDHURST_TABLE[MEDHURST_TABLE.length - 2];
-const longSlope = (last.H - beforeLast.H) / (last.lengthOverDiameter - beforeLast.lengthOverDiameter);
+/**
+ * Largest ℓ/D at which the table is used. The remembered rows at ℓ/D = 40 and 50 (4.32, 5.22) lie below the
+ * long-coil limit 4ε0ℓ/π (4.51 and 5.64 pF per cm of diameter; REFERENCES b1–b2, Knight 2013), which every
+ * long single-layer coil exceeds, so they are not used.
+ */
+export const MEDHURST_TABLE_MAX = 30;
+
+/** The long-coil slope 4ε0/π in pF per cm of diameter per unit of ℓ/D (0.11273). */
+export const LONG_COIL_SLOPE = (4 * EPSILON_0) / Math.PI / 1e-10;
+
+const used = MEDHURST_TABLE.filter((row) => row.lengthOverDiameter <= MEDHURST_TABLE_MAX);
+const lnX = used.map((row) => Math.log(row.lengthOverDiameter));
+const interpolateH = pchip(lnX, used.map((row) => row.H));
+const first = used[0];
+const last = used[used.length - 1];
 
 /**
  * Self-capacitance of a single-layer solenoid from Medhurst's table, in F.
  *
  * C = H·D with H in pF/cm, interpolated by PCHIP (shape-preserving monotone cubic, Fritsch–Carlson)
- * in ln(ℓ/D) through {@link MEDHURST_TABLE}; 1 pF/cm = 1e-10 F/m. Outside ℓ/D = 0.1–50 `inRange`
- * is false: above 50 H continues along the table's last straight segment (0.09 pF/cm per unit of
- * ℓ/D, close to the long-coil asymptote 4ε0/π); below 0.1 H is held at 0.96, which underestimates
- * very short coils. Medhurst's coils were on polystyrene rods; an air-cored coil is a few per cent
- * lower (Knight 2013). Accuracy about 5 % ({@link MEDHURST_ACCURACY}).
+ * in ln(ℓ/D) through {@link MEDHURST_TABLE} up to ℓ/D = {@link MEDHURST_TABLE_MAX}; 1 pF/cm = 1e-10 F/m.
+ * Outside ℓ/D = 0.1–30 `inRange` is false: above 30 H rises from H(30) at the long-coil slope 4ε0/π
+ * ({@link LONG_COIL_SLOPE}), so it stays above the limit 4ε0ℓ/π; below 0.1 H is held at 0.96, which
+ * underestimates very short coils. Medhurst's coils were on solid polystyrene rods; a coil on a thin pipe is
+ * lower, by 10–30 % (Knight 2013): the field model (field/model.ts) treats the former explicitly.
+ * Accuracy about 5 % ({@link MEDHURST_ACCURACY}) for his rods.
  *
  * Domain: diameter > 0, length > 0 (wire-centre diameter and winding length).
  * @example selfCapacitanceMedhurst(0.1, 0.5) // { capacitance: 8.1e-12, inRange: true }
@@ -49,7 +59,7 @@ export function selfCapacitanceMedhurst(diameter: number, length: number): { cap
     H = first.H;
     inRange = false;
   } else if (x > last.lengthOverDiameter) {
-    H = last.H + longSlope * (x - last.lengthOverDiameter);
+    H = last.H + LONG_COIL_SLOPE * (x - last.lengthOverDiameter);
     inRange = false;
   } else {
     H = interpolateH(Math.log(x));

@@ -101,5 +101,14 @@ export function checkDesign(d: DesignSI): DesignIssue[] {
       issues.push({ path: 'primary.elevation', message: 'part of the primary would be below the ground plane' });
     }
   }
+  const rail = d.strikeRail;
+  if (rail) {
+    if (rail.height - rail.conductorDiameter / 2 <= -d.groundClearance) {
+      issues.push({ path: 'strikeRail.height', message: 'the strike rail would touch or sit below the ground plane' });
+    }
+    if (rail.diameter - rail.conductorDiameter <= windingDiameter(s) + w.insulatedDiameter) {
+      issues.push({ path: 'strikeRail.diameter', message: `the strike rail must be wider than the secondary winding (${mm(windingDiameter(s))})` });
+    }
+  }
   return issues;
 }

@@ -19,7 +19,7 @@ export type BemOptions = {
 /** Default panel counts: doubling them changes C by less than 1e-4 (asserted in the tests). */
 export const DEFAULT_PANELS: Readonly<Record<AxisymmetricShape['kind'], number>> = { torus: 24, sphere: 16, disk: 16 };
 
-type Curve = {
+export type Curve = {
   t0: number;
   t1: number;
   /** Writes (ρ, z) of the curve at t and returns the charge weight W(t) per unit t. */
@@ -142,7 +142,7 @@ export function capacitanceAxisymmetricBEM(shape: AxisymmetricShape, options: Be
 }
 
 /** 2K(m)/√A: the ring-charge potential without the factor q/(4π²ε0). */
-function ringKernel(rho: number, z: number, rs: number, zs: number): number {
+export function ringKernel(rho: number, z: number, rs: number, zs: number): number {
   const dz = z - zs;
   const sum = rho + rs;
   const diff = rho - rs;
@@ -158,7 +158,7 @@ const SELF_RULE = gaussLegendre(8);
  * 2K ≈ −2 ln|t − tᵢ| + smooth, so F(t)·2K + 2F(tᵢ) ln|t − tᵢ| is regular (F = W/√A) and the
  * subtracted term is integrated exactly; a cubic grading t = tᵢ ± (h/2)u³ clusters nodes at tᵢ.
  */
-function selfPanel(curve: Curve, ta: number, h: number, rho: number, z: number, wi: number, tmp: Float64Array): number {
+export function selfPanel(curve: Curve, ta: number, h: number, rho: number, z: number, wi: number, tmp: Float64Array): number {
   const half = 0.5 * h;
   const ti = ta + half;
   const fi = wi / (2 * rho);
@@ -178,7 +178,7 @@ function selfPanel(curve: Curve, ta: number, h: number, rho: number, z: number, 
   return sum - 2 * fi * logIntegral;
 }
 
-function curveOf(shape: AxisymmetricShape): Curve {
+export function curveOf(shape: AxisymmetricShape): Curve {
   switch (shape.kind) {
     case 'torus': {
       const { R, r, centreZ } = shape;
@@ -252,8 +252,9 @@ const memo = new Map<string, number>();
  *
  * Method: {@link capacitanceAxisymmetricBEM} at its default panel count with a ground image; for a
  * toroid majorDiameter is the overall OUTSIDE diameter, so R = (major − minor)/2 is the tube's
- * centre-line radius and r = minor/2 its radius. The secondary coil, its self-capacitance and nearby
- * objects are not included (they add capacitance no closed form covers). Results are memoised in a
+ * centre-line radius and r = minor/2 its radius. The secondary coil and nearby objects are not included:
+ * the coil shields the topload and lowers what the two hold together below the sum of the parts (the
+ * whole structure is solved in field/structure.ts). Results are memoised in a
  * small bounded module-level map keyed by the exact inputs, so re-solving an unchanged topload is free;
  * the function stays deterministic.
  *

@@ -83,8 +83,8 @@ export function legendreQHalf(n: number, xi: number): number {
  * diameter and d the tube (minor) diameter; here converted to SI (2.8 pF per inch = 1.1024e-10 F/m).
  * The square root is the radius of the sphere with the torus's surface area. For an isolated torus
  * it is within about 7 % of {@link capacitanceTorusIsolated} for d/D = 0.1–0.35 and falls further
- * below for fatter tori (tests check within 10 % over 0.1–0.35). It ignores the ground and the
- * coil, which add capacitance (see toploadCapacitance).
+ * below for fatter tori (tests check within 10 % over 0.1–0.35). It ignores the ground (which adds
+ * capacitance) and the coil (which shields the topload and takes capacitance away; see field/structure.ts).
  *
  * Domain: majorOuterDiameter > 2·minorDiameter > 0.
  * @example capacitanceToroidEmpirical(0.75, 0.15) // ≈ 3.16e-11 (31.6 pF)

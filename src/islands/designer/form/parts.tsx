@@ -7,7 +7,7 @@ import { SelectField } from './SelectField';
 import { Part } from './Part';
 import { AwgPicker } from './AwgPicker';
 import { fieldId, useFieldFeedback } from './field-context';
-import { DESIGN_PARTS } from '~/lib/design/registry';
+import { DESIGN_PARTS, findDesignField } from '~/lib/design/registry';
 
 type PartProps = { system: UnitSystem };
 
@@ -42,6 +42,12 @@ export const SecondaryPart = memo(function SecondaryPart({ system }: PartProps) 
         <Field path="secondary.elevation" system={system} />
       </div>
       <Field path="groundClearance" system={system} />
+      <SelectField path="secondary.former.material" options={[{ value: '', label: 'Not given: thin PVC pipe assumed' }, ...(findDesignField('secondary.former.material')?.options ?? [])]} />
+      <Field path="secondary.former.permittivity" system={system} />
+      <Field path="secondary.former.wallThickness" system={system} />
+      <Field path="strikeRail.diameter" system={system} />
+      <Field path="strikeRail.height" system={system} />
+      <Field path="strikeRail.conductorDiameter" system={system} />
     </Part>
   );
 });

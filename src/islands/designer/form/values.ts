@@ -88,6 +88,16 @@ export function fromDesignInput(d: DesignInput, name: string, system: UnitSystem
   }
   v.secondary.windingLength = Lt(s.windingLength);
   v.secondary.elevation = Lt(s.elevation);
+  if (s.former) {
+    v.secondary.former.material = (s.former.material ?? '') as typeof v.secondary.former.material;
+    v.secondary.former.permittivity = s.former.permittivity === undefined ? '' : String(s.former.permittivity);
+    v.secondary.former.wallThickness = Lt(s.former.wallThickness);
+  }
+  if (d.strikeRail) {
+    v.strikeRail.diameter = Lt(d.strikeRail.diameter);
+    v.strikeRail.height = Lt(d.strikeRail.height);
+    v.strikeRail.conductorDiameter = Lt(d.strikeRail.conductorDiameter);
+  }
   v.groundClearance = d.groundClearance === undefined ? '' : Lt(d.groundClearance);
   if (d.topload) {
     v.topload.shape = d.topload.shape;
@@ -214,6 +224,14 @@ export function toDesignInput(v: FormValues): DesignInput {
     streamerLength: g.streamerMode === 'length' ? opt(g.streamerLength) : undefined,
     targetCoupling: opt(g.targetCoupling) === undefined ? undefined : num(g.targetCoupling),
   });
+  const f = s.former;
+  const former = withoutUndefined({
+    material: opt(String(f.material)),
+    permittivity: opt(f.permittivity) === undefined ? undefined : num(f.permittivity),
+    wallThickness: opt(f.wallThickness),
+  });
+  const r = v.strikeRail;
+  const strikeRail = withoutUndefined({ diameter: opt(r.diameter), height: opt(r.height), conductorDiameter: opt(r.conductorDiameter) });
   const design = withoutUndefined({
     secondary: withoutUndefined({
       formDiameter: s.formDiameter.trim(),
@@ -221,9 +239,12 @@ export function toDesignInput(v: FormValues): DesignInput {
       wire,
       windingLength: opt(s.windingLength),
       elevation: opt(s.elevation),
+      former: Object.keys(former).length ? former : undefined,
     }),
     groundClearance: opt(v.groundClearance),
     topload,
+    // a rail with any field given goes to the schema, which names a missing diameter
+    strikeRail: Object.keys(strikeRail).length ? { ...strikeRail, diameter: r.diameter.trim() } : undefined,
     primary,
     tank,
     supply,

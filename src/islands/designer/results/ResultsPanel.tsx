@@ -4,6 +4,7 @@ import { formatFixed, formatPercent, formatQuantity as q, MISSING, type UnitSyst
 import { SafetyNote } from '~/components/SafetyNote';
 import { FigureRow, Group } from './Row';
 import { TapCallout } from './TapCallout';
+import { FieldModelPanel } from './FieldModelPanel';
 
 type Props = { result: Result; system: UnitSystem; stale?: boolean };
 
@@ -38,7 +39,7 @@ export const ResultsPanel = memo(function ResultsPanel({ result: r, system, stal
           {r.topload && <FigureRow result={r} system={system} figure="toploadCapacitance" />}
           <FigureRow result={r} system={system} figure="loadedFrequency"
             strong
-            note={band ? <>Likely between {q(band.low, 'frequency', { digits: 3 })} and {q(band.high, 'frequency', { digits: 3 })}: the models' stated accuracy.</> : undefined}
+            note={band && !r.tuning ? <>Likely between {q(band.low, 'frequency', { digits: 3 })} and {q(band.high, 'frequency', { digits: 3 })}{band.nominal !== r.system.resonantFrequency ? ' with the streamer allowance' : ''}: the models' stated accuracy.</> : undefined}
           />
           <FigureRow result={r} system={system} figure="totalCapacitance" />
           <FigureRow result={r} system={system} figure="quarterWaveFrequency"
@@ -53,12 +54,19 @@ export const ResultsPanel = memo(function ResultsPanel({ result: r, system, stal
         </Group>
       )}
 
+      <FieldModelPanel result={r} system={system} />
+
       {(r.primary || r.tuning) && (
         <Group title="Primary and tap" id="res-primary">
           <dl>
           {r.tuning && (
             <>
-              <FigureRow result={r} system={system} figure="targetFrequency" />
+              <FigureRow
+                result={r}
+                system={system}
+                figure="targetFrequency"
+                note={band ? <>Likely between {q(band.low, 'frequency', { digits: 3 })} and {q(band.high, 'frequency', { digits: 3 })}: the models' stated accuracy.</> : undefined}
+              />
               <FigureRow result={r} system={system} figure="tapTurns" value={r.tuning.tapTurns === null ? 'out of reach' : formatFixed(r.tuning.tapTurns, 2)} />
               <FigureRow result={r} system={system} figure="primaryFrequencyAllTurns" />
               <FigureRow result={r} system={system} figure="requiredInductance" />
