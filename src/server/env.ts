@@ -19,6 +19,11 @@ const schema = z.object({
   S3_SECRET_ACCESS_KEY: z.string().optional(),
   S3_REGION: z.string().default('us-east-1'),
   DATA_DIR: z.string().default('data'),
+  /** Reverse proxies whose X-Forwarded-For / X-Forwarded-Proto are believed: addresses or CIDR ranges, comma-separated. */
+  TRUSTED_PROXIES: z
+    .string()
+    .optional()
+    .refine((v) => v === undefined || v.split(',').every((x) => x.trim() === '' || /^[0-9a-fA-F:.]+(\/\d{1,3})?$/.test(x.trim())), 'must list IP addresses or CIDR ranges, comma-separated'),
 });
 
 export type Env = z.infer<typeof schema> & { BETTER_AUTH_SECRET: string; BETTER_AUTH_URL: string };

@@ -6,8 +6,12 @@ import { schema, type Db } from '../db/client';
 import { getDb } from '../db';
 import { env, isLoopbackHost } from '../env';
 import { actionMail, sendMail, type OutgoingMail } from '../mail';
+import { signInGuard } from './sign-in-guard';
 
 export const CLIENT_IP_HEADER = 'x-coilwright-client-ip';
+
+/** Default lifetime of the signed session cookie cache, in seconds. */
+export const SESSION_CACHE_SECONDS = 60;
 
 export type AuthOptions = {
   db: Db;
@@ -16,11 +20,17 @@ export type AuthOptions = {
   trustedOrigins: string[];
   send: (mail: OutgoingMail) => Promise<void>;
   signInLimit?: number;
+  /** Failed sign-ins per account within 15 minutes before that account's sign-in is refused for a while. */
+  accountSignInLimit?: number;
+  /** Seconds a signed session cookie is trusted before the database is asked again (revocation takes effect within it). */
+  sessionCacheSeconds?: number;
 };
 
 /** Built through a factory so tests can hand it their own database and mail sink. */
 export function createAuth(o: AuthOptions) {
   const limit = o.signInLimit ?? 10;
+  const guard = signInGuard(o.accountSignInLimit ?? 10);
+  const https = new URL(o.baseURL).protocol === 'https:';
   return betterAuth({
     appName: 'Coilwright',
     baseURL: o.baseURL,
@@ -63,6 +73,12 @@ export function createAuth(o: AuthOptions) {
         );
       },
     },
+    session: {
+      // A signed copy of the session in a cookie spares the database lookup on each request; a signed-out
+      // or disabled session stops working when this copy expires.
+      cookieCache: { enabled: true, maxAge: o.sessionCacheSeconds ?? SESSION_CACHE_SECONDS },
+    },
+    hooks: { before: guard.before, after: guard.after },
     plugins: [admin({ ac, roles: siteRoles, defaultRole: 'member', adminRoles: ['admin'] })],
     rateLimit: {
       enabled: true,
@@ -78,6 +94,8 @@ export function createAuth(o: AuthOptions) {
       // Never relaxed by the environment (test runners set TEST=true, which would otherwise skip it).
       disableOriginCheck: false,
       ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] },
+      // Secure (and __Secure- prefixed) cookies whenever the site is served over HTTPS.
+      useSecureCookies: https,
     },
     telemetry: { enabled: false },
   });
@@ -85,7 +103,13 @@ export function createAuth(o: AuthOptions) {
 
 export type Auth = ReturnType<typeof createAuth>;
 
-function trustedOriginsFor(baseURL: string, host: string, port: number): string[] {
+/** Origins a browser request to this site may carry: the public URL, and both loopback spellings when serving on loopback. */
+export function siteOrigins(): ReadonlySet<string> {
+  const e = env();
+  return new Set(trustedOriginsFor(e.BETTER_AUTH_URL, e.HOST, e.PORT));
+}
+
+export function trustedOriginsFor(baseURL: string, host: string, port: number): string[] {
   const origins = new Set([new URL(baseURL).origin]);
   if (isLoopbackHost(host)) {
     origins.add(`http://localhost:${port}`);
@@ -106,6 +130,8 @@ export function getAuth(): Auth {
       trustedOrigins: trustedOriginsFor(e.BETTER_AUTH_URL, e.HOST, e.PORT),
       send: sendMail,
       signInLimit: Number(process.env.COILWRIGHT_AUTH_RATE_LIMIT ?? '') || 10,
+      accountSignInLimit: Number(process.env.COILWRIGHT_ACCOUNT_SIGN_IN_LIMIT ?? '') || 10,
+      sessionCacheSeconds: Number(process.env.COILWRIGHT_SESSION_CACHE_SECONDS ?? '') || SESSION_CACHE_SECONDS,
     });
   }
   return g.__coilwrightAuth;
