@@ -1,5 +1,6 @@
 import { defineMiddleware } from 'astro:middleware';
-import { getAuth, siteOrigins } from './server/auth';
+import { getAuth, sessionCacheMs, siteOrigins } from './server/auth';
+import { changedWithin } from './server/auth/freshness';
 import { dbReady } from './server/db';
 import { errorResponse } from './server/http';
 import { toSessionUser } from './server/session';
@@ -40,7 +41,12 @@ export const onRequest = defineMiddleware(async (context, next) => {
   await dbReady();
   let setCookies: string[] = [];
   try {
-    const { headers, response: found } = await getAuth().api.getSession({ headers: request.headers, returnHeaders: true });
+    const auth = getAuth();
+    let { headers, response: found } = await auth.api.getSession({ headers: request.headers, returnHeaders: true });
+    if (found && changedWithin(found.user.id, sessionCacheMs())) {
+      // The cached copy may predate the change: ask the database (this also rewrites the cookie).
+      ({ headers, response: found } = await auth.api.getSession({ headers: request.headers, returnHeaders: true, query: { disableCookieCache: true } }));
+    }
     setCookies = headers.getSetCookie();
     if (found && !(found.user as { banned?: boolean }).banned) {
       context.locals.user = toSessionUser(found.user as Record<string, unknown>);

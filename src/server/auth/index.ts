@@ -7,6 +7,7 @@ import { getDb } from '../db';
 import { env, isLoopbackHost } from '../env';
 import { actionMail, sendMail, type OutgoingMail } from '../mail';
 import { signInGuard } from './sign-in-guard';
+import { markUserChanged } from './freshness';
 
 export const CLIENT_IP_HEADER = 'x-coilwright-client-ip';
 
@@ -79,6 +80,13 @@ export function createAuth(o: AuthOptions) {
       cookieCache: { enabled: true, maxAge: o.sessionCacheSeconds ?? SESSION_CACHE_SECONDS },
     },
     hooks: { before: guard.before, after: guard.after },
+    databaseHooks: {
+      user: { update: { after: async (u) => markUserChanged(u.id) } },
+      session: {
+        update: { after: async (x) => void (x.userId && markUserChanged(x.userId)) },
+        delete: { after: async (x) => void (x.userId && markUserChanged(x.userId)) },
+      },
+    },
     plugins: [admin({ ac, roles: siteRoles, defaultRole: 'member', adminRoles: ['admin'] })],
     rateLimit: {
       enabled: true,
@@ -102,6 +110,13 @@ export function createAuth(o: AuthOptions) {
 }
 
 export type Auth = ReturnType<typeof createAuth>;
+
+export { markUserChanged } from './freshness';
+
+/** The cookie cache lifetime in effect, in milliseconds. */
+export function sessionCacheMs(): number {
+  return (Number(process.env.COILWRIGHT_SESSION_CACHE_SECONDS ?? '') || SESSION_CACHE_SECONDS) * 1000;
+}
 
 /** Origins a browser request to this site may carry: the public URL, and both loopback spellings when serving on loopback. */
 export function siteOrigins(): ReadonlySet<string> {

@@ -6,6 +6,7 @@ import { user } from '../../../server/db/schema';
 import { handle, readJson, requireUser } from '../../../server/http';
 import { parseBody } from '../../../server/services/designs';
 import { toSessionUser } from '../../../server/session';
+import { markUserChanged } from '../../../server/auth';
 
 export const prerender = false;
 
@@ -22,7 +23,10 @@ export const PATCH: APIRoute = handle(async ({ locals, request }) => {
   const u = requireUser(locals);
   const b = parseBody(meBody, await readJson(request));
   const db = getDb();
-  if (Object.keys(b).length) await db.update(user).set({ ...b, updatedAt: new Date() }).where(eq(user.id, u.id));
+  if (Object.keys(b).length) {
+    await db.update(user).set({ ...b, updatedAt: new Date() }).where(eq(user.id, u.id));
+    markUserChanged(u.id);
+  }
   const row = await db.query.user.findFirst({ where: eq(user.id, u.id) });
   return Response.json({ user: toSessionUser(row as unknown as Record<string, unknown>) });
 });
