@@ -78,3 +78,9 @@ for (const s of sections) {
   const { runDesignerBench } = await import('./bench/designer');
   await runDesignerBench();
 }
+
+// Throughput of the API and pages against a bare node:http server, in the same run.
+{
+  const { runApiBench } = await import('./bench/api');
+  await runApiBench();
+}
