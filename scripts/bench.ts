@@ -66,6 +66,11 @@ for (const s of sections) {
   console.log(`${s.name}\n  median ${r.median.toFixed(3)} ms, min ${r.min.toFixed(3)} ms (target ${s.target}, ${s.repeats} runs)`);
 }
 
+{
+  const { runElevationBench } = await import('./bench/elevation');
+  runElevationBench();
+}
+
 // The page-weight and keystroke figures need a build to serve.
 {
   const { existsSync } = await import('node:fs');
