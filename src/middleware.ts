@@ -28,7 +28,7 @@ export const onRequest = defineMiddleware(async (context, next) => {
       const refused = url.pathname.startsWith('/api/')
         ? errorResponse('forbidden', 'Requests that change data must come from this site’s own pages.')
         : new Response('Requests that change data must come from this site’s own pages.', { status: 403, headers: { 'content-type': 'text/plain; charset=utf-8' } });
-      return finishResponse(request, refused, { https });
+      return finishResponse(request, refused, { https, csp: !import.meta.env.DEV });
     }
   }
 
@@ -60,6 +60,7 @@ export const onRequest = defineMiddleware(async (context, next) => {
   const own = response.headers.getSetCookie().some((c) => /better-auth\.session_/.test(c));
   const finished = await finishResponse(request, response, {
     https,
+    csp: !import.meta.env.DEV,
     extraHeaders: context.locals.rateLimit,
     setCookies: own ? [] : setCookies,
   });

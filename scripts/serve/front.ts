@@ -15,6 +15,7 @@ import { acceptsEncoding, pickEncoding } from '../../src/server/security/compres
 import { resolveClientAddress, isTrusted, trustedProxyList } from '../../src/server/security/client-address';
 import { commonSecurityHeaders, htmlCsp, NON_HTML_CSP } from '../../src/server/security/headers';
 import { HTTPS_HEADER } from '../../src/server/security/forwarded';
+import { pageKey, storedPage } from '../../src/server/security/page-cache';
 
 type Handler = (req: IncomingMessage, res: ServerResponse) => void;
 
@@ -111,7 +112,16 @@ export function frontHandler(app: Handler, clientDir: string, trustedSpec: strin
     for (const [k, v] of Object.entries(commonSecurityHeaders(https))) res.setHeader(k, v);
 
     if (req.method === 'GET' || req.method === 'HEAD') {
-      const url = (req.url ?? '/').split('?')[0].split('#')[0];
+      const [url, query] = (req.url ?? '/').split('#')[0].split('?');
+      // A page that is the same for everyone, already rendered by the app for a visitor without a session.
+      const key = req.method === 'GET' ? pageKey('GET', url, query === undefined ? '' : `?${query}`, req.headers.cookie, req.headers['accept-encoding'] as string | undefined) : null;
+      const page = key ? storedPage(key) : undefined;
+      if (page) {
+        // HSTS follows this request's scheme (set above), not the one of the request that filled the store.
+        res.writeHead(page.status, Object.fromEntries(page.headers.filter(([k]) => k !== 'strict-transport-security')));
+        res.end(page.body);
+        return;
+      }
       let path: string | null = null;
       try {
         path = decodeURIComponent(url);

@@ -7,17 +7,32 @@ import { pickEncoding } from './compress';
  */
 export const SHARED_PAGES = new Set(['/', '/methods', '/safety', '/validation']);
 
-type Stored = { body: Uint8Array; status: number; headers: [string, string][] };
-const store = new Map<string, Stored>();
+export type StoredPage = { body: Uint8Array; status: number; headers: [string, string][] };
+// Held on globalThis so the start script's front server (which loads this module from the sources) and
+// the built app's middleware (its own bundled copy) share one store.
+const g = globalThis as unknown as { __coilwrightPages?: Map<string, StoredPage> };
+const store = (g.__coilwrightPages ??= new Map<string, StoredPage>());
+
+const SESSION_COOKIE = /(?:^|;\s*)(?:__Secure-)?better-auth\.session_(?:token|data)=/;
 
 export function hasSessionCookie(request: Request): boolean {
-  return /(?:^|;\s*)(?:__Secure-)?better-auth\.session_(?:token|data)=/.test(request.headers.get('cookie') ?? '');
+  return SESSION_COOKIE.test(request.headers.get('cookie') ?? '');
+}
+
+/** The cache key of a request, or null when its page is not one of the shared pages or it carries a session. */
+export function pageKey(method: string, pathname: string, search: string, cookie: string | null | undefined, acceptEncoding: string | null | undefined): string | null {
+  if (method !== 'GET' || search !== '' || !SHARED_PAGES.has(pathname)) return null;
+  if (SESSION_COOKIE.test(cookie ?? '')) return null;
+  return `${pathname}|${pickEncoding(acceptEncoding) ?? 'identity'}`;
 }
 
 export function sharedPageKey(request: Request, url: URL): string | null {
-  if (request.method !== 'GET' || url.search !== '' || !SHARED_PAGES.has(url.pathname)) return null;
-  if (hasSessionCookie(request)) return null;
-  return `${url.pathname}|${pickEncoding(request.headers.get('accept-encoding')) ?? 'identity'}`;
+  return pageKey(request.method, url.pathname, url.search, request.headers.get('cookie'), request.headers.get('accept-encoding'));
+}
+
+/** The stored page for a key, as the front server writes it straight to the socket. */
+export function storedPage(key: string): StoredPage | undefined {
+  return store.get(key);
 }
 
 export function cachedPage(key: string): Response | null {

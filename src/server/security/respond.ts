@@ -1,7 +1,13 @@
 import { appendVary, encodeBody, isCompressible, MIN_COMPRESS_BYTES, pickEncoding } from './compress';
 import { commonSecurityHeaders, htmlCsp, isHtml, NON_HTML_CSP } from './headers';
 
-export type FinishOptions = { https: boolean; extraHeaders?: Record<string, string>; setCookies?: string[] };
+export type FinishOptions = {
+  https: boolean;
+  extraHeaders?: Record<string, string>;
+  setCookies?: string[];
+  /** False under `astro dev`, whose injected inline scripts change with every edit. */
+  csp?: boolean;
+};
 
 const NO_BODY = new Set([101, 204, 205, 304]);
 
@@ -19,7 +25,8 @@ export async function finishResponse(request: Request, response: Response, o: Fi
   const type = headers.get('content-type');
   const html = isHtml(type);
   const compressible = isCompressible(type) && !headers.has('content-encoding') && !NO_BODY.has(response.status);
-  if (!html && !headers.has('content-security-policy')) headers.set('content-security-policy', NON_HTML_CSP);
+  const csp = o.csp ?? true;
+  if (csp && !html && !headers.has('content-security-policy')) headers.set('content-security-policy', NON_HTML_CSP);
   if (!html && !compressible) {
     return new Response(response.body, { status: response.status, statusText: response.statusText, headers });
   }
@@ -28,7 +35,7 @@ export async function finishResponse(request: Request, response: Response, o: Fi
     return new Response(response.body, { status: response.status, statusText: response.statusText, headers });
   }
   let body: Uint8Array = new Uint8Array(await response.arrayBuffer());
-  if (html && !headers.has('content-security-policy')) headers.set('content-security-policy', htmlCsp(new TextDecoder().decode(body)));
+  if (csp && html && !headers.has('content-security-policy')) headers.set('content-security-policy', htmlCsp(new TextDecoder().decode(body)));
   const encoding = compressible && body.byteLength >= MIN_COMPRESS_BYTES ? pickEncoding(request.headers.get('accept-encoding')) : null;
   if (encoding) {
     body = await encodeBody(body, encoding);
