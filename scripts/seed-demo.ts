@@ -7,6 +7,7 @@ import type { Db } from '../src/server/db/client';
 import { user, designMembers } from '../src/server/db/schema';
 import { createAuth } from '../src/server/auth';
 import { createDesign } from '../src/server/services/designs';
+import { withDatabase } from '../src/server/services/database';
 import { toSessionUser } from '../src/server/session';
 import { exampleDesigns } from '../src/lib/design/examples';
 
@@ -44,7 +45,7 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
   const owner = toSessionUser(member.row as unknown as Record<string, unknown>);
   const made: string[] = [];
   for (const ex of exampleDesigns) {
-    const d = await createDesign(db, owner, { name: ex.name, design: ex.design, message: 'First draft for the open day' });
+    const d = await withDatabase(db, () => createDesign(owner, { name: ex.name, design: ex.design, message: 'First draft for the open day' }));
     made.push(d.id);
   }
   if (made[1]) await db.insert(designMembers).values({ designId: made[1], userId: helper.row.id, role: 'editor' });

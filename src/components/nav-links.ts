@@ -1,4 +1,4 @@
-import type { SessionUser } from '../server/session';
+import type { SessionUser } from '../lib/api/contracts/me';
 
 export type NavLink = { href: string; label: string };
 

@@ -1,24 +1,7 @@
 import { errorMessages } from './errors';
+import { apiErrorCodes, type ApiErrorCode } from './api/contracts/errors';
 
-/** The stable error codes of the /api/v1 endpoints; their words come from the one map in errors.ts. */
-const codes = [
-  'validation_failed',
-  'invalid_json',
-  'unauthorized',
-  'forbidden',
-  'not_found',
-  'conflict',
-  'payload_too_large',
-  'rate_limited',
-  'email_not_verified',
-  'unsupported_media_type',
-  'internal_error',
-] as const;
+export type { ApiErrorBody, ApiErrorCode, ApiIssue } from './api/contracts/errors';
 
-export type ApiErrorCode = (typeof codes)[number];
-
-export const apiErrors = Object.fromEntries(codes.map((c) => [c, errorMessages[c]])) as Record<ApiErrorCode, string>;
-
-export type ApiIssue = { path: string; message: string };
-
-export type ApiErrorBody = { error: { code: ApiErrorCode; message: string; issues?: ApiIssue[] } };
+/** The words of each /api/v1 error code (the codes are listed in the contract), from the one map in errors.ts. */
+export const apiErrors = Object.fromEntries(apiErrorCodes.map((c) => [c, errorMessages[c]])) as Record<ApiErrorCode, string>;

@@ -39,6 +39,7 @@ export const errorMessages = {
   internal_error: 'Something went wrong on our side; nothing was changed.',
   // the connection itself
   network_error: 'Could not reach Coilwright. Check the connection and try again.',
+  bad_response: 'The server sent an answer that could not be read. Reload the page to see where things stand.',
   unknown: 'Something went wrong. Try again; if it keeps happening, tell the site administrator.',
 } as const satisfies Record<string, string>;
 

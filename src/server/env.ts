@@ -19,6 +19,15 @@ const schema = z.object({
   S3_SECRET_ACCESS_KEY: z.string().optional(),
   S3_REGION: z.string().default('us-east-1'),
   DATA_DIR: z.string().default('data'),
+  // Set by the start script when it runs the local fake mail and S3 servers (no SMTP_URL / S3_ENDPOINT given).
+  COILWRIGHT_DEV_SMTP_PORT: z.coerce.number().int().min(1).max(65535).optional(),
+  COILWRIGHT_DEV_S3_ENDPOINT: z.string().optional(),
+  // Requests per minute and client; the tests raise the sign-in limit.
+  COILWRIGHT_AUTH_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
+  COILWRIGHT_SOLVE_RATE_LIMIT: z.coerce.number().int().min(1).default(120),
+  // Failed sign-ins per account within 15 minutes; seconds the signed session cookie copy is trusted.
+  COILWRIGHT_ACCOUNT_SIGN_IN_LIMIT: z.coerce.number().int().min(1).default(10),
+  COILWRIGHT_SESSION_CACHE_SECONDS: z.coerce.number().int().min(1).max(3600).default(60),
   /** Reverse proxies whose X-Forwarded-For / X-Forwarded-Proto are believed: addresses or CIDR ranges, comma-separated. */
   TRUSTED_PROXIES: z
     .string()

@@ -1,4 +1,6 @@
-import { apiErrors, type ApiErrorCode, type ApiIssue } from '../lib/api-errors';
+import type { z } from 'zod';
+import { apiErrors } from '../lib/api-errors';
+import type { ApiErrorCode, ApiIssue } from '../lib/api/contracts/errors';
 
 const statusOf: Record<ApiErrorCode, number> = {
   validation_failed: 400,
@@ -57,6 +59,52 @@ export async function readJson(request: Request, limit = MAX_JSON): Promise<unkn
   } catch {
     throw new ApiError('invalid_json');
   }
+}
+
+/** A JSON body that may be left out entirely (an empty body reads as undefined); anything sent must be JSON. */
+export async function readOptionalJson(request: Request, limit?: number): Promise<unknown> {
+  const text = await request.clone().text();
+  if (text.trim() === '') return undefined;
+  return readJson(request, limit);
+}
+
+/** zod's issues in the contract's shape: a dotted path and a message. */
+export function issuesOf(error: z.ZodError): ApiIssue[] {
+  return error.issues.map((i) => ({ path: i.path.join('.'), message: i.message }));
+}
+
+/** Checks a value against a contract schema; a mismatch is a 400 naming every field. */
+export function parseValue<T extends z.ZodType>(schema: T, value: unknown, message = 'Some fields need attention.'): z.output<T> {
+  const r = schema.safeParse(value);
+  if (!r.success) throw new ApiError('validation_failed', message, issuesOf(r.error));
+  return r.data;
+}
+
+export type BodyOptions = {
+  /** largest body in bytes (default 1 MB) */
+  limit?: number;
+  /** an empty body reads as undefined instead of invalid JSON */
+  optional?: boolean;
+};
+
+/** Reads a request's JSON body and checks it against a contract schema: the one place request bodies are parsed. */
+export async function parseBody<T extends z.ZodType>(request: Request, schema: T, options: BodyOptions = {}): Promise<z.output<T>> {
+  const raw = options.optional ? await readOptionalJson(request, options.limit) : await readJson(request, options.limit);
+  return parseValue(schema, raw);
+}
+
+/** Checks a URL's query against a contract schema; parameters left empty count as absent. */
+export function parseQuery<T extends z.ZodType>(url: URL, schema: T, message = 'Some parameters need attention.'): z.output<T> {
+  const raw: Record<string, string> = {};
+  for (const [key, value] of url.searchParams) if (value !== '') raw[key] = value;
+  return parseValue(schema, raw, message);
+}
+
+/** Checks a path parameter; one that cannot name anything is a 404 like an unknown one. */
+export function parseParam<T extends z.ZodType>(raw: string | undefined, schema: T, notFound: string): z.output<T> {
+  const r = schema.safeParse(raw);
+  if (!r.success) throw new ApiError('not_found', notFound);
+  return r.data;
 }
 
 export function requireUser(locals: App.Locals) {

@@ -1,16 +1,8 @@
-import type { SiteRole } from '../lib/permissions';
+import type { SessionUser } from '../lib/api/contracts/me';
 
-export type UnitSystem = 'metric' | 'imperial';
+export type { SessionUser };
 
-export type SessionUser = {
-  id: string;
-  name: string;
-  email: string;
-  emailVerified: boolean;
-  role: SiteRole;
-  unitSystem: UnitSystem;
-};
-
+/** The session's user row as the app sees it (GET /api/v1/me). */
 export function toSessionUser(u: Record<string, unknown>): SessionUser {
   return {
     id: String(u.id),

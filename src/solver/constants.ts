@@ -6,6 +6,9 @@
  * those of IEC 60028 (1925), "International standard of resistance for copper" (from memory).
  */
 
+/** Metres per inch: exact by definition, the international inch (1959), NIST SP 811 (2008) Appendix B.8. */
+export const METRES_PER_INCH = 0.0254;
+
 /** Vacuum magnetic permeability μ0 in H/m (CODATA 2022). */
 export const MU_0 = 1.25663706127e-6;
 

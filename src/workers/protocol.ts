@@ -77,4 +77,9 @@ export type SolverMessage = { id: number; request: SolverRequest };
 
 export type SolverResponse =
   | { id: number; ok: true; reply: SolverReply }
-  | { id: number; ok: false; issues: DesignIssue[]; message?: string };
+  | { id: number; ok: false; issues: DesignIssue[]; message?: string; failed?: undefined }
+  /** the computation itself broke (a thrown error, or the worker stopped): not the input's fault, worth a retry */
+  | { id: number; ok: false; issues: []; message: string; failed: true };
+
+/** What a person reads when the computation broke rather than the input being wrong. */
+export const SOLVER_FAILED_MESSAGE = 'The computation stopped unexpectedly.';

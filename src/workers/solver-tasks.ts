@@ -22,6 +22,7 @@ import type {
   SweepRequest,
   TuningCurve,
 } from './protocol';
+import { SOLVER_FAILED_MESSAGE } from './protocol';
 
 const TUNING_POINTS = 60;
 const COUPLING_POINTS = 60;
@@ -106,12 +107,17 @@ export function goalAnswer(d: DesignSI, goal: Goal): GoalAnswer | null {
 }
 
 /** Runs one request; the same code answers in the worker and, for tests, on the main thread. */
+/** A thrown error as a reply the page can show with a way to try again. */
+export function solverFailure(id: number, e: unknown): SolverResponse {
+  return { id, ok: false, failed: true, issues: [], message: e instanceof Error && e.message ? e.message : SOLVER_FAILED_MESSAGE };
+}
+
 export function runRequest(id: number, request: SolverRequest, now: () => number = () => performance.now()): SolverResponse {
   const t0 = now();
-  const parsed = parseDesign(request.input);
-  if (!parsed.ok) return { id, ok: false, issues: parsed.issues };
-  const d = parsed.design;
   try {
+    const parsed = parseDesign(request.input);
+    if (!parsed.ok) return { id, ok: false, issues: parsed.issues };
+    const d = parsed.design;
     switch (request.type) {
       case 'solve': {
         const result = solve(d);
@@ -128,6 +134,6 @@ export function runRequest(id: number, request: SolverRequest, now: () => number
         return { id, ok: true, reply: { type: 'goal', data: goalAnswer(d, request.goal) } };
     }
   } catch (e) {
-    return { id, ok: false, issues: [], message: e instanceof Error ? e.message : 'The computation failed for this design.' };
+    return solverFailure(id, e);
   }
 }

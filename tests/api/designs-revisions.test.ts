@@ -65,8 +65,8 @@ describe('revisions', () => {
     expect(r.status).toBe(200);
     const d = await r.json();
     expect(d.inputs).toEqual([
-      { path: 'topload.majorDiameter', label: 'Topload overall diameter', from: '20 in', to: '24 in' },
-      { path: 'topload.minorDiameter', label: 'Topload tube diameter', from: '5 in', to: '6 in' },
+      { path: 'topload.majorDiameter', label: 'Toroid overall diameter', from: '20 in', to: '24 in' },
+      { path: 'topload.minorDiameter', label: 'Toroid tube diameter', from: '5 in', to: '6 in' },
     ]);
     const f = d.figures.find((x: { key: string }) => x.key === 'loadedFrequency');
     const [r1, r2] = [await (await c.get(`/api/v1/designs/${id}/revisions/1`)).json(), await (await c.get(`/api/v1/designs/${id}/revisions/2`)).json()];

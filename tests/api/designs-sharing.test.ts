@@ -134,7 +134,7 @@ describe('review summary', () => {
     expect(r.headers.get('content-type')).toMatch(/^text\/plain/);
     const text = await r.text();
     expect(text).toContain(NAME);
-    expect(text).toMatch(/Secondary form diameter\s+4\.5 in/);
+    expect(text).toMatch(/Form outer diameter\s+4\.5 in/);
     expect(text).toMatch(/Secondary turns\s+1000/);
     expect(text).toMatch(/Loaded resonant frequency \(with topload\)\s+[\d.]+ kHz/);
     expect(text).toMatch(/Coupling coefficient k \(all primary turns\)\s+0\.\d+/);

@@ -217,3 +217,19 @@ test('/designs/:id of a stranger is the 404 page, and signed-out visitors are se
   await owner.close();
   await stranger.close();
 });
+
+test('solver: a worker that fails to start shows an error with Retry, and Retry computes the results', async ({ page }) => {
+  // the worker's script cannot be fetched, so the worker dies before its first answer
+  await page.route(/solver\.worker[^/]*\.js/, (route) => route.abort());
+  await page.goto(EXAMPLE);
+  const failed = page.getByTestId('solve-failed');
+  await expect(failed).toContainText('The results could not be computed.');
+  await expect(page.getByTestId('solve-state')).toHaveText('stopped');
+  await expect(loaded(page)).toHaveCount(0);
+
+  await page.unroute(/solver\.worker[^/]*\.js/);
+  await failed.getByRole('button', { name: 'Retry' }).click();
+  await expect(loaded(page)).toHaveText(/\d+(\.\d+)? kHz/);
+  await upToDate(page);
+  await expect(failed).toHaveCount(0);
+});

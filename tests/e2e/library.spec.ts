@@ -1,6 +1,6 @@
 import { expect, test, type APIRequestContext } from '@playwright/test';
 import { exampleDesigns } from '../../src/lib/design/examples';
-import { formatSI } from '../../src/lib/library/format';
+import { formatSi } from '../../src/lib/format';
 
 function uniqueEmail(who: string) {
   return `${who}-${Date.now()}-${Math.random().toString(36).slice(2, 8)}@example.test`;
@@ -24,7 +24,7 @@ test('share a design, open the link in a fresh browser, see its frequency, copy 
   const owner = await ownerCtx.newPage();
   await signUp(ownerCtx.request, 'Owner Oksana');
   const made = await createDesign(ownerCtx.request, 'Pier Street coil');
-  const frequency = formatSI(made.result.system.resonantFrequency, 'Hz');
+  const frequency = formatSi(made.result.system.resonantFrequency, 'Hz', 3);
   expect(frequency).toMatch(/^\d+(\.\d+)? kHz$/);
 
   await owner.goto('/designs');
@@ -129,7 +129,7 @@ test('history: compare two revisions and restore the first', async ({ browser })
   await page.getByLabel('Compare revision').selectOption('1');
   await page.getByLabel('with revision').selectOption('2');
   await page.getByRole('button', { name: 'Compare side by side' }).click();
-  await expect(page.getByTestId('changed-inputs')).toContainText('Topload overall diameter');
+  await expect(page.getByTestId('changed-inputs')).toContainText('Toroid overall diameter');
   await expect(page.getByTestId('changed-inputs')).toContainText('24 in');
   await expect(page.getByTestId('changed-results').locator('[data-figure="loadedFrequency"]')).toContainText('−');
 

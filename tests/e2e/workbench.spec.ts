@@ -59,3 +59,45 @@ test('the bench page records a measurement with its error, uploads a photo to th
   await page.goto(`/designs/${id}/build?rpm=fast`);
   await expect(page.locator('#sheet-rpm-error')).toContainText('rpm must be a number');
 });
+
+test('deleting a bench measurement asks first, and only the confirmed one goes', async ({ page }) => {
+  const email = `bench-delete-${Date.now()}@example.test`;
+  const signUp = await page.request.post('/api/auth/sign-up/email', { data: { name: 'Ada Bench', email, password: 'wind-it-tight-42' } });
+  expect(signUp.ok()).toBe(true);
+  const design = exampleDesigns.find((e) => e.id === 'sign-transformer-toroid')!.design;
+  const created = await page.request.post('/api/v1/designs', { data: { name: 'Bench delete coil', design } });
+  expect(created.status()).toBe(201);
+  const { id } = (await created.json()) as { id: string };
+  for (const m of [
+    { kind: 'bare-frequency', value: 310000, measuredAt: '2026-03-12' },
+    { kind: 'secondary-inductance', value: 0.012, measuredAt: '2026-03-13' },
+  ]) {
+    const r = await page.request.post(`/api/v1/designs/${id}/measurements`, { data: m });
+    expect(r.status()).toBe(201);
+  }
+
+  await page.goto(`/designs/${id}/bench`);
+  const table = page.getByTestId('bench-table');
+  await expect(table.locator('tbody tr[data-kind]')).toHaveCount(2);
+  // the rows are rendered on the server; the buttons act once the bench log island has hydrated
+  await expect(page.locator('astro-island:has([data-testid="bench-table"])')).not.toHaveAttribute('ssr', /.*/);
+
+  // cancelling keeps the row, on the page and on the server
+  await table.getByRole('button', { name: /^Delete Resonant frequency, bare secondary/ }).click();
+  const dialog = page.getByRole('dialog', { name: 'Delete this measurement?' });
+  await expect(dialog).toBeVisible();
+  await expect(dialog).toContainText('2026-03-12');
+  await dialog.getByRole('button', { name: 'Keep it' }).click();
+  await expect(dialog).toBeHidden();
+  await expect(table.locator('tbody tr[data-kind]')).toHaveCount(2);
+
+  // confirming deletes that one measurement only
+  await table.getByRole('button', { name: /^Delete Resonant frequency, bare secondary/ }).click();
+  await dialog.getByRole('button', { name: 'Delete measurement' }).click();
+  await expect(table.locator('tr[data-kind="bare-frequency"]')).toHaveCount(0);
+  await expect(table.locator('tr[data-kind="secondary-inductance"]')).toHaveCount(1);
+  await expect(page.getByRole('status').filter({ hasText: 'Deleted: Resonant frequency, bare secondary' })).toBeVisible();
+
+  const stored = (await (await page.request.get(`/api/v1/designs/${id}/measurements`)).json()) as { measurements: Array<{ kind: string }> };
+  expect(stored.measurements.map((m) => m.kind)).toEqual(['secondary-inductance']);
+});

@@ -32,7 +32,7 @@ describe('openDb / prepareDb', () => {
   it('a design row cannot point at a missing owner (foreign keys enforced)', async () => {
     const db = openDb(':memory:');
     await prepareDb(db, ':memory:');
-    await expect(db.insert(designs).values({ id: 'd1', ownerId: 'nobody', name: 'x', design: {} })).rejects.toThrow();
+    await expect(db.insert(designs).values({ id: 'd1', ownerId: 'nobody', name: 'x', design: { secondary: { formDiameter: '4 in', turns: 1000, wire: { awg: 24, insulation: 'heavy' } } } })).rejects.toThrow();
   });
 });
 

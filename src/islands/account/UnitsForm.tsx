@@ -1,8 +1,10 @@
 import { useId, useState, type SubmitEvent } from 'react';
-import { apiErrorMessage, errorMessages } from '~/lib/errors';
+import { failureMessage } from '~/lib/api/client';
+import { withApi } from '~/lib/api/provider';
+import { useUpdateMe } from '~/lib/api/queries/account';
+import type { UnitSystem } from '~/lib/format';
 import { FormMessage } from '~/components/ui/FormMessage';
 import { SubmitButton } from '~/components/ui/SubmitButton';
-import { updateMe, type UnitSystem } from './update-me';
 
 type Props = { unitSystem: UnitSystem };
 
@@ -11,26 +13,23 @@ const choices: { value: UnitSystem; label: string; example: string }[] = [
   { value: 'imperial', label: 'Imperial', example: 'inches and feet, e.g. 4.5 in' },
 ];
 
-export default function UnitsForm({ unitSystem }: Props) {
+function UnitsForm({ unitSystem }: Props) {
   const [value, setValue] = useState<UnitSystem>(unitSystem);
-  const [pending, setPending] = useState(false);
+  const update = useUpdateMe();
+  const pending = update.isPending;
   const [formError, setFormError] = useState<string | null>(null);
   const [saved, setSaved] = useState<string | null>(null);
   const name = useId();
 
   async function onSubmit(e: SubmitEvent<HTMLFormElement>) {
     e.preventDefault();
-    setPending(true);
     setFormError(null);
     setSaved(null);
     try {
-      const r = await updateMe({ unitSystem: value });
-      if (r.ok) setSaved(value === 'metric' ? 'Lengths will show in metric units.' : 'Lengths will show in imperial units.');
-      else setFormError(apiErrorMessage(r.error));
-    } catch {
-      setFormError(errorMessages.network_error);
-    } finally {
-      setPending(false);
+      await update.mutateAsync({ unitSystem: value });
+      setSaved(value === 'metric' ? 'Lengths will show in metric units.' : 'Lengths will show in imperial units.');
+    } catch (err) {
+      setFormError(failureMessage(err));
     }
   }
 
@@ -68,3 +67,6 @@ export default function UnitsForm({ unitSystem }: Props) {
     </form>
   );
 }
+
+/** The display units of the signed-in person. */
+export default withApi(UnitsForm);

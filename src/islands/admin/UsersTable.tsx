@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useMemo, useState, type SubmitEvent } from 'react';
+import { useCallback, useMemo, useState, type SubmitEvent } from 'react';
 import {
   createColumnHelper,
   flexRender,
@@ -9,74 +9,52 @@ import {
 } from '@tanstack/react-table';
 import { authErrorMessage, errorMessages } from '~/lib/errors';
 import { FormMessage } from '~/components/ui/FormMessage';
+import { formatDate } from '~/lib/format';
 import { SortableTableHead } from '~/components/ui/SortableTableHead';
-import { listUsers, type SiteRoleName, type UserRow } from './list-users';
-import { setUserDisabled, setUserRole } from './update-user';
+import { withApi } from '~/lib/api/provider';
+import { AuthFailure, useSetUserDisabled, useSetUserRole, useUsers, type SiteRoleName, type UserRow } from '~/lib/api/queries/admin';
 
 type Props = { currentUserId: string; pageSize?: number };
 
 const column = createColumnHelper<UserRow>();
 
-function formatDate(iso: string): string {
-  if (!iso) return '—';
-  return new Date(iso).toLocaleDateString(undefined, { year: 'numeric', month: 'short', day: 'numeric' });
+function failureText(e: unknown): string {
+  return e instanceof AuthFailure ? authErrorMessage(e.error) : errorMessages.network_error;
 }
 
-export default function UsersTable({ currentUserId, pageSize = 25 }: Props) {
-  const [rows, setRows] = useState<UserRow[]>([]);
-  const [total, setTotal] = useState(0);
+
+function UsersTable({ currentUserId, pageSize = 25 }: Props) {
   const [offset, setOffset] = useState(0);
   const [search, setSearch] = useState('');
   const [draft, setDraft] = useState('');
-  const [loading, setLoading] = useState(true);
   const [busyId, setBusyId] = useState<string | null>(null);
-  const [error, setError] = useState<string | null>(null);
+  const [actionError, setActionError] = useState<string | null>(null);
   const [status, setStatus] = useState<string | null>(null);
   const [sorting, setSorting] = useState<SortingState>([]);
 
-  const load = useCallback(async () => {
-    setLoading(true);
+  const users = useUsers({ limit: pageSize, offset, search });
+  const rows = useMemo(() => users.data?.rows ?? [], [users.data]);
+  const total = users.data?.total ?? 0;
+  const loading = users.isFetching;
+  const error = actionError ?? (users.error ? failureText(users.error) : null);
+  const setRole = useSetUserRole();
+  const setDisabled = useSetUserDisabled();
+
+  const act = useCallback(async (row: UserRow, run: () => Promise<void>, done: string) => {
+    setBusyId(row.id);
+    setActionError(null);
+    setStatus(null);
     try {
-      const r = await listUsers({ limit: pageSize, offset, search });
-      if (r.ok) {
-        setRows(r.page.rows);
-        setTotal(r.page.total);
-        setError(null);
-      } else {
-        setError(authErrorMessage(r.error));
-      }
-    } catch {
-      setError(errorMessages.network_error);
+      await run();
+      setStatus(done);
+    } catch (e) {
+      setActionError(failureText(e));
     } finally {
-      setLoading(false);
+      setBusyId(null);
     }
-  }, [offset, pageSize, search]);
-
-  useEffect(() => {
-    void load();
-  }, [load]);
-
-  const act = useCallback(
-    async (row: UserRow, run: () => Promise<{ ok: true } | { ok: false; error: { code?: string | null } }>, done: string) => {
-      setBusyId(row.id);
-      setError(null);
-      setStatus(null);
-      try {
-        const r = await run();
-        if (r.ok) {
-          setStatus(done);
-          await load();
-        } else {
-          setError(authErrorMessage(r.error));
-        }
-      } catch {
-        setError(errorMessages.network_error);
-      } finally {
-        setBusyId(null);
-      }
-    },
-    [load],
-  );
+  }, []);
+  const { mutateAsync: changeRole } = setRole;
+  const { mutateAsync: changeDisabled } = setDisabled;
 
   const columns = useMemo(
     () => [
@@ -112,7 +90,7 @@ export default function UsersTable({ currentUserId, pageSize = 25 }: Props) {
               title={self ? 'You cannot change your own role.' : undefined}
               onChange={(e) => {
                 const role = e.target.value as SiteRoleName;
-                void act(u, () => setUserRole(u.id, role), `${u.email} is now ${role === 'admin' ? 'an administrator' : 'a member'}.`);
+                void act(u, () => changeRole({ userId: u.id, role }), `${u.email} is now ${role === 'admin' ? 'an administrator' : 'a member'}.`);
               }}
             >
               <option value="member">Member</option>
@@ -145,7 +123,7 @@ export default function UsersTable({ currentUserId, pageSize = 25 }: Props) {
               onClick={() =>
                 void act(
                   u,
-                  () => setUserDisabled(u.id, !u.disabled),
+                  () => changeDisabled({ userId: u.id, disabled: !u.disabled }),
                   u.disabled ? `${u.email} can sign in again.` : `${u.email} is disabled and signed out.`,
                 )
               }
@@ -157,7 +135,7 @@ export default function UsersTable({ currentUserId, pageSize = 25 }: Props) {
         },
       }),
     ],
-    [act, busyId, currentUserId],
+    [act, busyId, changeDisabled, changeRole, currentUserId],
   );
 
   const table = useReactTable({
@@ -250,3 +228,6 @@ export default function UsersTable({ currentUserId, pageSize = 25 }: Props) {
     </div>
   );
 }
+
+/** Accounts on this site: find by e-mail, change a role, disable or enable. */
+export default withApi(UsersTable);

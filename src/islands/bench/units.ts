@@ -1,10 +1,13 @@
 import { MEASUREMENT_KINDS, type MeasurementKind } from '../../lib/troubleshoot/bench';
+import { siFactor } from '../../lib/format/units';
+
+const units = (...labels: string[]) => labels.map((label) => ({ label, factor: siFactor(label)! }));
 
 /** Units offered for typing a value of each SI unit, with the factor to SI. First is the default. */
 export const INPUT_UNITS: Record<string, Array<{ label: string; factor: number }>> = {
-  H: [{ label: 'mH', factor: 1e-3 }, { label: 'µH', factor: 1e-6 }, { label: 'H', factor: 1 }],
-  Hz: [{ label: 'kHz', factor: 1e3 }, { label: 'MHz', factor: 1e6 }, { label: 'Hz', factor: 1 }],
-  m: [{ label: 'in', factor: 0.0254 }, { label: 'cm', factor: 0.01 }, { label: 'm', factor: 1 }],
+  H: units('mH', 'µH', 'H'),
+  Hz: units('kHz', 'MHz', 'Hz'),
+  m: units('in', 'cm', 'm'),
   '1': [{ label: 'k', factor: 1 }],
   turns: [{ label: 'turns', factor: 1 }],
 };

@@ -33,7 +33,7 @@ export default function DesignViewer({ name, design, result, unitSystem = 'metri
     return () => {
       live = false;
     };
-  }, [inputKey]);
+  }, [design]);
   if (!result || (parsed && !parsed.ok)) {
     return (
       <p className="cw-alert" role="status">

@@ -1,5 +1,6 @@
 import { useId, useState, type FormEvent } from 'react';
-import { formatFixed, formatQuantity, lengthInputText, type UnitSystem } from '~/lib/format';
+import { formatFixed, formatQuantity, lengthInputText, parseQuantityLazy, type UnitSystem } from '~/lib/format';
+import { designField } from '~/lib/design/registry';
 import type { Goal, GoalAnswer } from '../../workers/protocol';
 import { solverClient } from './solver-client';
 
@@ -42,13 +43,11 @@ export function GoalPanel({ input, system, hasPrimary, hasTank, readOnly, apply 
 
   async function onFrequency(e: FormEvent) {
     e.preventDefault();
-    // the unit parser is loaded when first needed, not with the page
-    const { parseQuantity } = await import('~/lib/design/units');
-    const p = parseQuantity(freq, 'frequency');
+    const p = await parseQuantityLazy(freq, 'frequency');
     if (!p.ok || !(p.value > 0)) return setStatus((s) => ({ ...s, frequency: { tone: 'fault', text: `Target frequency: ${p.ok ? 'must be above 0' : p.message}` } }));
     void run(
       { kind: 'frequency', hz: p.value },
-      (a) => (a.kind === 'frequency' ? `Secondary turns set to ${Math.round(a.turns)} (winding ${formatQuantity(a.windingLength, 'length', { system })}).` : ''),
+      (a) => (a.kind === 'frequency' ? `${designField('secondary.turns').label} set to ${Math.round(a.turns)} (winding ${formatQuantity(a.windingLength, 'length', { system })}).` : ''),
       'No turn count that fits reaches this frequency with this form and wire.',
     );
   }
@@ -59,7 +58,7 @@ export function GoalPanel({ input, system, hasPrimary, hasTank, readOnly, apply 
     if (!Number.isFinite(t) || t <= 0) return setStatus((s) => ({ ...s, tap: { tone: 'fault', text: 'Tap: enter the turns from the inner end, e.g. 8.5' } }));
     void run(
       { kind: 'tap', turns: t },
-      (a) => (a.kind === 'tap' ? `Tank capacitance set to ${formatQuantity(a.capacitance, 'capacitance', { digits: 3 })} for a tap at ${formatFixed(t, 2)} turns.` : ''),
+      (a) => (a.kind === 'tap' ? `${designField('tank.capacitance').label} set to ${formatQuantity(a.capacitance, 'capacitance', { digits: 3 })} for a tap at ${formatFixed(t, 2)} turns.` : ''),
       'No capacitance puts the tap there.',
     );
   }
@@ -119,7 +118,7 @@ export function GoalPanel({ input, system, hasPrimary, hasTank, readOnly, apply 
       <form onSubmit={onCoupling} className="grid gap-2 sm:grid-cols-[1fr_auto] sm:items-end">
         <div>
           <label htmlFor={ids.k} className="cw-label text-sm">
-            Target coupling k
+            {designField('tuning.targetCoupling').label}
           </label>
           <input id={ids.k} className="cw-input" value={k} onChange={(e) => setK(e.target.value)} placeholder="e.g. 0.15" inputMode="decimal" disabled={readOnly || !hasPrimary} autoComplete="off" />
         </div>

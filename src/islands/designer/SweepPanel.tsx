@@ -1,6 +1,6 @@
 import { lazy, Suspense, useId, useMemo, useState, type FormEvent } from 'react';
 import { sweepablePaths, type DesignSI } from '~/solver';
-import { formatSignificant, lengthInputText, formatQuantity, type UnitSystem } from '~/lib/format';
+import { formatSignificant, lengthInputText, formatQuantity, parseQuantityLazy, type UnitSystem } from '~/lib/format';
 import type { SweepData } from '../../workers/protocol';
 import { solverClient } from './solver-client';
 import { currentValue, defaultRange, SWEEP_INPUTS, SWEEP_SERIES_OPTIONS, type SweepInput } from './sweep-inputs';
@@ -20,9 +20,7 @@ async function readRange(text: string, s: SweepInput): Promise<{ ok: true; value
     const n = Number(text.trim().replace(',', '.'));
     return Number.isFinite(n) && text.trim() !== '' ? { ok: true, value: n } : { ok: false, message: 'expected a number' };
   }
-  // the unit parser is loaded when first needed, not with the page
-  const { parseQuantity } = await import('~/lib/design/units');
-  return parseQuantity(text, s.quantity);
+  return parseQuantityLazy(text, s.quantity);
 }
 
 /** Sweep any numeric input over a range and chart the results the builder picks. */

@@ -1,4 +1,4 @@
-import { useEffect, useRef } from 'react';
+import { useCallback, useEffect, useRef } from 'react';
 
 /**
  * Asks before leaving the page while there are unsaved changes. `allow()` lifts the guard for a
@@ -7,7 +7,9 @@ import { useEffect, useRef } from 'react';
 export function useLeaveGuard(dirty: boolean): { allow: () => void } {
   const dirtyRef = useRef(dirty);
   const allowed = useRef(false);
-  dirtyRef.current = dirty;
+  useEffect(() => {
+    dirtyRef.current = dirty;
+  }, [dirty]);
   useEffect(() => {
     const onBeforeUnload = (e: BeforeUnloadEvent) => {
       if (!dirtyRef.current || allowed.current) return;
@@ -18,5 +20,6 @@ export function useLeaveGuard(dirty: boolean): { allow: () => void } {
     window.addEventListener('beforeunload', onBeforeUnload);
     return () => window.removeEventListener('beforeunload', onBeforeUnload);
   }, []);
-  return { allow: () => void (allowed.current = true) };
+  const allow = useCallback(() => void (allowed.current = true), []);
+  return { allow };
 }

@@ -1,11 +1,13 @@
-import { useEffect, useRef, useState } from 'react';
+import { useCallback, useEffect, useRef, useState } from 'react';
 import type { DesignIssue, DesignSI, Result } from '~/solver';
 import { solverClient } from './solver-client';
 
 export type LiveState =
   | { status: 'idle' }
   | { status: 'ok'; design: DesignSI; result: Result; ms: number }
-  | { status: 'invalid'; issues: DesignIssue[]; message?: string };
+  | { status: 'invalid'; issues: DesignIssue[]; message?: string }
+  /** the computation broke (not the input's fault): shown with a way to try again */
+  | { status: 'failed'; message: string };
 
 const QUIET_MS = 150;
 
@@ -13,16 +15,23 @@ const QUIET_MS = 150;
  * Solves the design in the worker as the builder types: at once after a pause, otherwise at most
  * every 150 ms with the latest input. A reply older than the one on screen is dropped, and the last
  * good result stays available while the design is invalid, so the panel never flickers to empty.
+ * A failed computation ends "pending"; `retry` runs the same input again.
  */
-export function useLiveSolve(input: unknown, key: string): { live: LiveState; last: { design: DesignSI; result: Result } | null; pending: boolean } {
+export function useLiveSolve(
+  input: unknown,
+  key: string,
+): { live: LiveState; last: { design: DesignSI; result: Result } | null; pending: boolean; retry: () => void } {
   const [live, setLive] = useState<LiveState>({ status: 'idle' });
   const [last, setLast] = useState<{ design: DesignSI; result: Result } | null>(null);
   const [pending, setPending] = useState(true);
+  const [attempt, setAttempt] = useState(0);
   const seq = useRef(0);
   const shown = useRef(0);
   const lastRun = useRef(-Infinity);
   const inputRef = useRef(input);
-  inputRef.current = input;
+  useEffect(() => {
+    inputRef.current = input;
+  }, [input]);
 
   useEffect(() => {
     const mine = ++seq.current;
@@ -37,10 +46,12 @@ export function useLiveSolve(input: unknown, key: string): { live: LiveState; la
       if (r.ok && r.reply.type === 'solve') {
         setLive({ status: 'ok', ...r.reply.data });
         setLast({ design: r.reply.data.design, result: r.reply.data.result });
-      } else if (!r.ok) setLive({ status: 'invalid', issues: r.issues, message: r.message });
+      } else if (!r.ok && r.failed) setLive({ status: 'failed', message: r.message });
+      else if (!r.ok) setLive({ status: 'invalid', issues: r.issues, message: r.message });
     }, wait);
     return () => clearTimeout(timer);
-  }, [key]);
+  }, [key, attempt]);
 
-  return { live, last, pending };
+  const retry = useCallback(() => setAttempt((n) => n + 1), []);
+  return { live, last, pending, retry };
 }

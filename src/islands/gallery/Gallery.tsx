@@ -1,27 +1,20 @@
 import { useRef, useState, type FormEvent } from 'react';
-import { request } from '../bench/api';
-
-export type AttachmentItem = {
-  id: string;
-  fileName: string;
-  contentType: string;
-  size: number;
-  kind: 'photo' | 'instrument';
-  url: string;
-  thumbnailUrl: string | null;
-  createdAt: string;
-};
+import { failureMessage } from '~/lib/api/client';
+import { withApi } from '~/lib/api/provider';
+import { useAttachments, useDeleteAttachment, useUploadAttachment, type AttachmentItem } from '~/lib/api/queries/bench';
 
 type Props = { designId: string; canWrite: boolean; initial: AttachmentItem[] };
 
 const sizeText = (b: number) => (b >= 1024 * 1024 ? `${(b / (1024 * 1024)).toFixed(1)} MB` : `${Math.max(1, Math.round(b / 1024))} kB`);
 
 /** Photos and instrument files of a design: upload, view, delete. Limits are checked again on the server. */
-export default function Gallery({ designId, canWrite, initial }: Props) {
-  const [items, setItems] = useState(initial);
+function Gallery({ designId, canWrite, initial }: Props) {
+  const { data: items } = useAttachments(designId, initial);
+  const uploading = useUploadAttachment(designId);
+  const deleting = useDeleteAttachment(designId);
   const [error, setError] = useState<string | null>(null);
   const [status, setStatus] = useState<string | null>(null);
-  const [busy, setBusy] = useState(false);
+  const busy = uploading.isPending;
   const input = useRef<HTMLInputElement>(null);
 
   async function upload(e: FormEvent) {
@@ -31,28 +24,26 @@ export default function Gallery({ designId, canWrite, initial }: Props) {
       setError('Choose a file first.');
       return;
     }
-    setBusy(true);
     setError(null);
-    const body = new FormData();
-    body.set('file', file);
-    const r = await request<AttachmentItem>('POST', `/api/v1/designs/${designId}/attachments`, body);
-    setBusy(false);
-    if (!r.ok) {
-      setError(r.message);
+    let item: AttachmentItem;
+    try {
+      item = await uploading.mutateAsync(file);
+    } catch (err) {
+      setError(failureMessage(err));
       return;
     }
-    setItems((old) => [r.data, ...old]);
-    setStatus(`Uploaded ${r.data.fileName}.`);
+    setStatus(`Uploaded ${item.fileName}.`);
     if (input.current) input.current.value = '';
   }
 
   async function remove(item: AttachmentItem) {
     if (!window.confirm(`Delete ${item.fileName}?`)) return;
-    const r = await request<void>('DELETE', `/api/v1/attachments/${item.id}`);
-    if (r.ok) {
-      setItems((old) => old.filter((x) => x.id !== item.id));
+    try {
+      await deleting.mutateAsync(item.id);
       setStatus(`Deleted ${item.fileName}.`);
-    } else setError(r.message);
+    } catch (err) {
+      setError(failureMessage(err));
+    }
   }
 
   const photos = items.filter((i) => i.kind === 'photo');
@@ -134,3 +125,6 @@ export default function Gallery({ designId, canWrite, initial }: Props) {
     </div>
   );
 }
+
+/** Photos and instrument files of a design: upload, view, delete. */
+export default withApi(Gallery);

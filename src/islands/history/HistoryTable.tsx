@@ -1,6 +1,8 @@
 import { useState } from 'react';
-import { call } from '~/lib/library/api-call';
-import { formatSI, formatTurns } from '~/lib/library/format';
+import { failureMessage } from '~/lib/api/client';
+import { withApi } from '~/lib/api/provider';
+import { useRestoreRevision } from '~/lib/api/queries/designs';
+import { formatDate, formatSi, formatTurns } from '~/lib/format';
 
 export type RevisionRow = {
   revision: number;
@@ -15,23 +17,19 @@ export type RevisionRow = {
 type Props = { designId: string; latest: number; canWrite: boolean; revisions: RevisionRow[] };
 
 function when(iso: string) {
-  return new Date(iso).toLocaleString(undefined, { year: 'numeric', month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit' });
+  return formatDate(iso, true);
 }
 
 /** Every revision, newest first; pick two to compare, open one read-only, or restore one as a new revision. */
-export default function HistoryTable({ designId, latest, canWrite, revisions }: Props) {
+function HistoryTable({ designId, latest, canWrite, revisions }: Props) {
   const [from, setFrom] = useState(revisions[1]?.revision ?? revisions[0]?.revision ?? 1);
   const [to, setTo] = useState(revisions[0]?.revision ?? 1);
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
+  const restoring = useRestoreRevision(designId);
+  const busy = restoring.isPending;
+  const error = restoring.error ? failureMessage(restoring.error) : null;
 
-  async function restore(n: number) {
-    setBusy(true);
-    setError(null);
-    const r = await call<{ revision: number }>('POST', `/api/v1/designs/${designId}/revisions/${n}/restore`, { revision: latest });
-    setBusy(false);
-    if (!r.ok) return setError(r.status === 409 ? 'Someone saved a newer revision meanwhile; reload the page and try again.' : r.message);
-    window.location.assign(`/designs/${designId}/history?restored=${r.data.revision}`);
+  function restore(n: number) {
+    restoring.mutate({ revision: n, latest }, { onSuccess: (r) => window.location.assign(`/designs/${designId}/history?restored=${r.revision}`) });
   }
 
   return (
@@ -82,7 +80,7 @@ export default function HistoryTable({ designId, latest, canWrite, revisions }: 
                 <td className="px-3 py-2">{when(r.createdAt)}</td>
                 <td className="px-3 py-2">{r.author}</td>
                 <td className="px-3 py-2">{r.message ?? <span className="text-ink-soft">—</span>}</td>
-                <td className="px-3 py-2 tabular-nums">{formatSI(r.loadedFrequency, 'Hz')}</td>
+                <td className="px-3 py-2 tabular-nums">{formatSi(r.loadedFrequency, 'Hz', 3)}</td>
                 <td className="px-3 py-2 tabular-nums">{formatTurns(r.tapTurns)}</td>
                 <td className="px-3 py-2">
                   <div className="flex justify-end gap-1">
@@ -90,7 +88,7 @@ export default function HistoryTable({ designId, latest, canWrite, revisions }: 
                       Open<span className="sr-only"> revision {r.revision}</span>
                     </a>
                     {canWrite && r.revision !== latest && (
-                      <button type="button" className="cw-btn cw-btn-quiet cw-btn-small" disabled={busy} onClick={() => void restore(r.revision)}>
+                      <button type="button" className="cw-btn cw-btn-quiet cw-btn-small" disabled={busy} onClick={() => restore(r.revision)}>
                         Restore<span className="sr-only"> revision {r.revision}</span>
                       </button>
                     )}
@@ -104,3 +102,6 @@ export default function HistoryTable({ designId, latest, canWrite, revisions }: 
     </div>
   );
 }
+
+/** Every revision, newest first; pick two to compare, open one read-only, or restore one as a new revision. */
+export default withApi(HistoryTable);

@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useMemo, useRef, useState, type FormEvent } from 'react';
+import { useCallback, useMemo, useRef, useState, type FormEvent } from 'react';
 import {
   createColumnHelper,
   flexRender,
@@ -12,26 +12,33 @@ import {
 } from '@tanstack/react-table';
 import { FormMessage } from '~/components/ui/FormMessage';
 import { SortableTableHead } from '~/components/ui/SortableTableHead';
-import { formatSI, formatTurns } from '~/lib/library/format';
+import { formatDate, formatSi, formatTurns } from '~/lib/format';
+import { checkDesignName } from '~/lib/design/name';
 import { Dialog } from './Dialog';
-import { deleteDesign, duplicateDesign, importDesign, listDesigns, renameDesign, type LibraryRole, type LibraryRow } from './library-api';
+import { ApiFailure, failureMessage } from '~/lib/api/client';
+import { withApi } from '~/lib/api/provider';
+import { useDeleteDesign, useDesignList, useDuplicateDesign, useImportDesign, useRenameDesign, type LibraryRow } from '~/lib/api/queries/designs';
+import type { DesignRole } from '~/lib/permissions';
 
 type Props = { pageSize?: number };
 
-const roleLabel: Record<LibraryRole, string> = { owner: 'Owner', editor: 'Editor', viewer: 'Viewer', admin: 'Site admin' };
+const roleLabel: Record<DesignRole, string> = { owner: 'Owner', editor: 'Editor', viewer: 'Viewer', admin: 'Site admin' };
 const column = createColumnHelper<LibraryRow>();
 
-function formatDate(iso: string): string {
-  const d = new Date(iso);
-  return Number.isNaN(d.getTime()) ? '—' : d.toLocaleString(undefined, { year: 'numeric', month: 'short', day: 'numeric', hour: '2-digit', minute: '2-digit' });
-}
 
-export default function LibraryTable({ pageSize = 20 }: Props) {
-  const [rows, setRows] = useState<LibraryRow[]>([]);
-  const [loading, setLoading] = useState(true);
-  const [error, setError] = useState<string | null>(null);
+function LibraryTable({ pageSize = 20 }: Props) {
+  const list = useDesignList();
+  const rows = useMemo(() => list.data ?? [], [list.data]);
+  const loading = list.isPending;
+  const [actionError, setActionError] = useState<string | null>(null);
+  const error = actionError ?? (list.error ? failureMessage(list.error) : null);
   const [status, setStatus] = useState<string | null>(null);
-  const [busy, setBusy] = useState(false);
+  const rename = useRenameDesign();
+  const duplicate = useDuplicateDesign();
+  const remove = useDeleteDesign();
+  const importFile = useImportDesign();
+  const busy = rename.isPending || duplicate.isPending || remove.isPending || importFile.isPending;
+  const setError = setActionError;
   const [sorting, setSorting] = useState<SortingState>([{ id: 'updatedAt', desc: true }]);
   const [globalFilter, setGlobalFilter] = useState('');
   const [columnFilters, setColumnFilters] = useState<ColumnFiltersState>([]);
@@ -41,44 +48,30 @@ export default function LibraryTable({ pageSize = 20 }: Props) {
   const [deleting, setDeleting] = useState<LibraryRow | null>(null);
   const fileRef = useRef<HTMLInputElement>(null);
 
-  const load = useCallback(async () => {
-    setLoading(true);
-    const r = await listDesigns();
-    setLoading(false);
-    if (r.ok) setRows(r.data.designs);
-    else setError(r.message);
-  }, []);
-  useEffect(() => {
-    void load();
-  }, [load]);
-
-  async function run(action: () => Promise<{ ok: boolean; message?: string }>, done: string) {
-    setBusy(true);
-    setError(null);
+  /** Runs one change; success or failure, the list is read again so it shows what is stored. */
+  const run = useCallback(async (action: () => Promise<unknown>, done: string, failure?: (e: ApiFailure) => string) => {
+    setActionError(null);
     setStatus(null);
-    const r = await action();
-    setBusy(false);
-    if (r.ok) {
+    try {
+      await action();
       setStatus(done);
-      await load();
       return true;
+    } catch (e) {
+      setActionError(e instanceof ApiFailure && failure ? failure(e) : failureMessage(e));
+      return false;
     }
-    setError(r.message ?? 'Something went wrong.');
-    return false;
-  }
+  }, []);
+  const { mutateAsync: duplicateDesign } = duplicate;
 
   async function onRename(e: FormEvent) {
     e.preventDefault();
     if (!renaming) return;
     const name = newName.trim();
-    if (!name) return setNameError('Give the design a name.');
-    if (name.length > 120) return setNameError('Keep the name under 120 characters.');
+    const nameError = checkDesignName(name);
+    if (nameError) return setNameError(nameError);
     const target = renaming;
     setRenaming(null);
-    await run(async () => {
-      const r = await renameDesign(target.id, name);
-      return r.ok ? { ok: true } : { ok: false, message: r.issues[0]?.message ?? r.message };
-    }, `Renamed to “${name}”.`);
+    await run(() => rename.mutateAsync({ id: target.id, name }), `Renamed to “${name}”.`, (f) => f.issues[0]?.message ?? f.message);
   }
 
   async function onImport(file: File | undefined) {
@@ -90,12 +83,14 @@ export default function LibraryTable({ pageSize = 20 }: Props) {
     } catch {
       return setError(`${file.name} is not a JSON file.`);
     }
-    await run(async () => {
-      const r = await importDesign(parsed);
-      if (r.ok) return { ok: true };
-      const detail = r.issues.slice(0, 5).map((i) => `${i.path || 'file'}: ${i.message}`).join('; ');
-      return { ok: false, message: detail ? `${r.message} ${detail}` : r.message };
-    }, `Imported ${file.name}.`);
+    await run(
+      () => importFile.mutateAsync(parsed),
+      `Imported ${file.name}.`,
+      (f) => {
+        const detail = f.issues.slice(0, 5).map((i) => `${i.path || 'file'}: ${i.message}`).join('; ');
+        return detail ? `${f.message} ${detail}` : f.message;
+      },
+    );
     if (fileRef.current) fileRef.current.value = '';
   }
 
@@ -112,10 +107,10 @@ export default function LibraryTable({ pageSize = 20 }: Props) {
       column.accessor('loadedFrequency', {
         header: 'Loaded frequency',
         sortUndefined: 'last',
-        cell: (c) => <span className="tabular-nums">{formatSI(c.getValue(), 'Hz')}</span>,
+        cell: (c) => <span className="tabular-nums">{formatSi(c.getValue(), 'Hz', 3)}</span>,
       }),
       column.accessor('tapTurns', { header: 'Tap', cell: (c) => <span className="tabular-nums">{formatTurns(c.getValue())}</span> }),
-      column.accessor('updatedAt', { header: 'Updated', sortingFn: 'datetime', cell: (c) => formatDate(c.getValue()) }),
+      column.accessor('updatedAt', { header: 'Updated', sortingFn: 'datetime', cell: (c) => formatDate(c.getValue(), true) }),
       column.accessor('role', {
         header: 'My role',
         filterFn: 'equals',
@@ -156,7 +151,7 @@ export default function LibraryTable({ pageSize = 20 }: Props) {
         },
       }),
     ],
-    [busy],
+    [busy, duplicateDesign, run],
   );
 
   const table = useReactTable({
@@ -306,7 +301,7 @@ export default function LibraryTable({ pageSize = 20 }: Props) {
             onClick={() => {
               const d = deleting;
               setDeleting(null);
-              if (d) void run(() => deleteDesign(d.id), `Deleted “${d.name}”.`);
+              if (d) void run(() => remove.mutateAsync(d.id), `Deleted “${d.name}”.`);
             }}
           >
             Delete for good
@@ -316,3 +311,6 @@ export default function LibraryTable({ pageSize = 20 }: Props) {
     </div>
   );
 }
+
+/** The library: every design the person can open, sortable and filterable, with rename, copy, delete and import. */
+export default withApi(LibraryTable);

@@ -1,22 +1,19 @@
-import { useState } from 'react';
-import { call } from '~/lib/library/api-call';
+import { failureMessage } from '~/lib/api/client';
+import { withApi } from '~/lib/api/provider';
+import { useAcceptInvitation } from '~/lib/api/queries/sharing';
 
 type Props = { token: string; designName: string };
 
-export default function AcceptInvitation({ token, designName }: Props) {
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
-  async function accept() {
-    setBusy(true);
-    setError(null);
-    const r = await call<{ designId: string }>('POST', `/api/v1/invitations/${token}/accept`);
-    setBusy(false);
-    if (!r.ok) return setError(r.message);
-    window.location.assign(`/designs/${r.data.designId}`);
+function AcceptInvitation({ token, designName }: Props) {
+  const join = useAcceptInvitation();
+  const busy = join.isPending;
+  const error = join.error ? failureMessage(join.error) : null;
+  function accept() {
+    join.mutate(token, { onSuccess: (r) => window.location.assign(`/designs/${r.designId}`) });
   }
   return (
     <div className="space-y-3">
-      <button type="button" className="cw-btn cw-btn-primary" disabled={busy} aria-busy={busy} onClick={() => void accept()}>
+      <button type="button" className="cw-btn cw-btn-primary" disabled={busy} aria-busy={busy} onClick={accept}>
         {busy ? 'Joining…' : `Accept and open “${designName}”`}
       </button>
       <div role="alert" className={error ? 'cw-alert' : undefined}>
@@ -25,3 +22,5 @@ export default function AcceptInvitation({ token, designName }: Props) {
     </div>
   );
 }
+
+export default withApi(AcceptInvitation);

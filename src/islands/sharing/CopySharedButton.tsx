@@ -1,12 +1,14 @@
-import { useState } from 'react';
-import { call } from '~/lib/library/api-call';
+import { failureMessage } from '~/lib/api/client';
+import { withApi } from '~/lib/api/provider';
+import { useCopySharedDesign } from '~/lib/api/queries/designs';
 
 type Props = { token: string; signedIn: boolean; next: string };
 
 /** Copies a shared design into the visitor's library, or asks them to sign in first. */
-export default function CopySharedButton({ token, signedIn, next }: Props) {
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
+function CopySharedButton({ token, signedIn, next }: Props) {
+  const copying = useCopySharedDesign();
+  const busy = copying.isPending;
+  const error = copying.error ? failureMessage(copying.error) : null;
   if (!signedIn) {
     return (
       <p className="text-sm">
@@ -15,17 +17,12 @@ export default function CopySharedButton({ token, signedIn, next }: Props) {
       </p>
     );
   }
-  async function copy() {
-    setBusy(true);
-    setError(null);
-    const r = await call<{ id: string }>('POST', `/api/v1/shared/${token}/copy`);
-    setBusy(false);
-    if (!r.ok) return setError(r.message);
-    window.location.assign(`/designs/${r.data.id}`);
+  function copy() {
+    copying.mutate(token, { onSuccess: (r) => window.location.assign(`/designs/${r.id}`) });
   }
   return (
     <div className="space-y-2">
-      <button type="button" className="cw-btn cw-btn-primary" disabled={busy} aria-busy={busy} onClick={() => void copy()}>
+      <button type="button" className="cw-btn cw-btn-primary" disabled={busy} aria-busy={busy} onClick={copy}>
         {busy ? 'Copying…' : 'Copy into my designs'}
       </button>
       <div role="alert" className={error ? 'cw-alert' : undefined}>
@@ -34,3 +31,5 @@ export default function CopySharedButton({ token, signedIn, next }: Props) {
     </div>
   );
 }
+
+export default withApi(CopySharedButton);

@@ -1,7 +1,8 @@
 import { SafetyNote } from '~/components/SafetyNote';
 import { summaryBlocks } from '~/lib/library/summary';
-import { pick } from '~/lib/library/figures';
-import { formatSI } from '~/lib/library/format';
+import { figureValue, LIBRARY_DIGITS } from '~/lib/library/figures';
+import { resultFigure } from '~/lib/design/figures';
+import { formatSi } from '~/lib/format';
 import KeyFigures from './KeyFigures';
 
 type Props = { design: unknown; result: unknown; headline?: boolean };
@@ -12,7 +13,7 @@ type Props = { design: unknown; result: unknown; headline?: boolean };
  */
 export default function DesignFacts({ design, result, headline = true }: Props) {
   const blocks = summaryBlocks({ design, result, measured: [] });
-  const energy = pick(result, 'tank.energyAtSupplyPeak');
+  const energy = figureValue(result, resultFigure('tankEnergy'));
   return (
     <div className="space-y-6">
       {headline && <KeyFigures result={result} />}
@@ -35,7 +36,7 @@ export default function DesignFacts({ design, result, headline = true }: Props) 
             </table>
             {b.title.startsWith('Predicted') && typeof energy === 'number' && (
               <SafetyNote kind="stored-energy" className="mt-3">
-                <p className="mt-1">This tank stores about {formatSI(energy, 'J')} at the supply peak.</p>
+                <p className="mt-1">This tank stores about {formatSi(energy, 'J', LIBRARY_DIGITS)} at the supply peak.</p>
               </SafetyNote>
             )}
           </section>

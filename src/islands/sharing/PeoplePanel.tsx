@@ -1,8 +1,22 @@
-import { useCallback, useEffect, useState, type FormEvent } from 'react';
+import { useState, type FormEvent } from 'react';
+import { ApiFailure, failureMessage } from '~/lib/api/client';
+import { withApi } from '~/lib/api/provider';
+import {
+  useCreateShare,
+  useInvitations,
+  useInvite,
+  useMembers,
+  useRemoveMember,
+  useRevokeShare,
+  useSetMemberRole,
+  useShares,
+  useTransferOwnership,
+  useWithdrawInvitation,
+  type Person,
+} from '~/lib/api/queries/sharing';
 import { FormMessage } from '~/components/ui/FormMessage';
 import { Dialog } from '../library/Dialog';
 import { copyText } from './copy-text';
-import * as api from './people-api';
 
 type Props = {
   designId: string;
@@ -15,46 +29,41 @@ type Props = {
 const roleName = { owner: 'Owner', editor: 'Editor', viewer: 'Viewer' } as const;
 
 /** People on a design, invitations and share links; the owner manages them, everyone else sees who is on it. */
-export default function PeoplePanel({ designId, designName, myUserId, isOwner, verified }: Props) {
-  const [people, setPeople] = useState<api.Person[]>([]);
-  const [shares, setShares] = useState<api.Share[]>([]);
-  const [invitations, setInvitations] = useState<api.Invitation[]>([]);
-  const [error, setError] = useState<string | null>(null);
+function PeoplePanel({ designId, designName, myUserId, isOwner, verified }: Props) {
+  const members = useMembers(designId);
+  const invitationList = useInvitations(designId, isOwner);
+  const shareList = useShares(designId, isOwner);
+  const people = members.data ?? [];
+  const shares = shareList.data ?? [];
+  const invitations = invitationList.data ?? [];
+  const [actionError, setError] = useState<string | null>(null);
+  const error = actionError ?? (members.error ? failureMessage(members.error) : null);
   const [status, setStatus] = useState<string | null>(null);
-  const [busy, setBusy] = useState(false);
   const [email, setEmail] = useState('');
   const [role, setRole] = useState<'editor' | 'viewer'>('viewer');
   const [emailError, setEmailError] = useState<string | null>(null);
-  const [heir, setHeir] = useState<api.Person | null>(null);
+  const [heir, setHeir] = useState<Person | null>(null);
+  const setMemberRole = useSetMemberRole(designId);
+  const removeMember = useRemoveMember(designId);
+  const transfer = useTransferOwnership(designId);
+  const invite = useInvite(designId);
+  const withdraw = useWithdrawInvitation(designId);
+  const createShare = useCreateShare(designId);
+  const revokeShare = useRevokeShare(designId);
+  const busy = [setMemberRole, removeMember, transfer, invite, withdraw, createShare, revokeShare].some((m) => m.isPending);
 
-  const load = useCallback(async () => {
-    const m = await api.listMembers(designId);
-    if (m.ok) setPeople(m.data.members);
-    else setError(m.message);
-    if (isOwner) {
-      const [s, i] = await Promise.all([api.listShares(designId), api.listInvitations(designId)]);
-      if (s.ok) setShares(s.data.shares);
-      if (i.ok) setInvitations(i.data.invitations);
-    }
-  }, [designId, isOwner]);
-  useEffect(() => {
-    void load();
-  }, [load]);
-
-  async function act<T>(run: () => Promise<{ ok: true; data: T } | { ok: false; message: string }>, done: string, after?: (data: T) => void) {
-    setBusy(true);
+  async function act<T>(run: () => Promise<T>, done: string, after?: (data: T) => void) {
     setError(null);
     setStatus(null);
-    const r = await run();
-    setBusy(false);
-    if (!r.ok) {
-      setError(r.message);
+    try {
+      const data = await run();
+      setStatus(done);
+      after?.(data);
+      return true;
+    } catch (e) {
+      setError(failureMessage(e));
       return false;
     }
-    setStatus(done);
-    after?.(r.data);
-    await load();
-    return true;
   }
 
   async function onInvite(e: FormEvent) {
@@ -62,20 +71,18 @@ export default function PeoplePanel({ designId, designName, myUserId, isOwner, v
     const addr = email.trim();
     if (!/^[^\s@]+@[^\s@]+\.[^\s@]+$/.test(addr)) return setEmailError('Enter a valid e-mail address.');
     setEmailError(null);
-    setBusy(true);
     setError(null);
     setStatus(null);
-    const r = await api.invite(designId, addr, role);
-    setBusy(false);
-    if (!r.ok) {
-      const field = r.issues.find((i) => i.path === 'email');
-      if (field) setEmailError(field.message);
-      else setError(r.message);
+    try {
+      await invite.mutateAsync({ email: addr, role });
+    } catch (err) {
+      const field = err instanceof ApiFailure ? err.byPath.email : undefined;
+      if (field) setEmailError(field);
+      else setError(failureMessage(err));
       return;
     }
     setEmail('');
     setStatus(`Invitation sent to ${addr}.`);
-    await load();
   }
 
   async function copyLink(url: string) {
@@ -115,7 +122,7 @@ export default function PeoplePanel({ designId, designName, myUserId, isOwner, v
                         aria-label={`Role of ${p.name}`}
                         value={p.role}
                         disabled={busy}
-                        onChange={(e) => void act(() => api.setMemberRole(designId, p.userId, e.target.value as 'editor' | 'viewer'), `${p.name} is now ${e.target.value === 'editor' ? 'an editor' : 'a viewer'}.`)}
+                        onChange={(e) => void act(() => setMemberRole.mutateAsync({ userId: p.userId, role: e.target.value as 'editor' | 'viewer' }), `${p.name} is now ${e.target.value === 'editor' ? 'an editor' : 'a viewer'}.`)}
                       >
                         <option value="editor">Editor (can save)</option>
                         <option value="viewer">Viewer (reads only)</option>
@@ -131,7 +138,7 @@ export default function PeoplePanel({ designId, designName, myUserId, isOwner, v
                           <button type="button" className="cw-btn cw-btn-quiet cw-btn-small" disabled={busy} onClick={() => setHeir(p)}>
                             Make owner<span className="sr-only"> {p.name}</span>
                           </button>
-                          <button type="button" className="cw-btn cw-btn-quiet cw-btn-small" disabled={busy} onClick={() => void act(() => api.removeMember(designId, p.userId), `${p.name} was removed.`)}>
+                          <button type="button" className="cw-btn cw-btn-quiet cw-btn-small" disabled={busy} onClick={() => void act(() => removeMember.mutateAsync(p.userId), `${p.name} was removed.`)}>
                             Remove<span className="sr-only"> {p.name}</span>
                           </button>
                         </>
@@ -141,7 +148,7 @@ export default function PeoplePanel({ designId, designName, myUserId, isOwner, v
                           type="button"
                           className="cw-btn cw-btn-quiet cw-btn-small"
                           disabled={busy}
-                          onClick={() => void act(() => api.removeMember(designId, p.userId), 'You left the design.', () => window.location.assign('/designs'))}
+                          onClick={() => void act(() => removeMember.mutateAsync(p.userId), 'You left the design.', () => window.location.assign('/designs'))}
                         >
                           Leave this design
                         </button>
@@ -200,7 +207,7 @@ export default function PeoplePanel({ designId, designName, myUserId, isOwner, v
                     {i.email} as {i.role}
                     {i.expired && <span className="ml-1 text-sm text-fault">(expired)</span>}
                   </span>
-                  <button type="button" className="cw-btn cw-btn-quiet cw-btn-small" disabled={busy} onClick={() => void act(() => api.withdrawInvitation(designId, i.id), `Invitation to ${i.email} withdrawn.`)}>
+                  <button type="button" className="cw-btn cw-btn-quiet cw-btn-small" disabled={busy} onClick={() => void act(() => withdraw.mutateAsync(i.id), `Invitation to ${i.email} withdrawn.`)}>
                     Withdraw<span className="sr-only"> invitation to {i.email}</span>
                   </button>
                 </li>
@@ -214,7 +221,7 @@ export default function PeoplePanel({ designId, designName, myUserId, isOwner, v
         <section aria-labelledby="links-title">
           <h2 id="links-title" className="text-xl">Read-only links</h2>
           <p className="mt-1 max-w-2xl text-ink-soft">Anyone with a link can read the design, its results and drawing without signing in, and nobody can change it through the link. Revoke a link to end it.</p>
-          <button type="button" className="cw-btn cw-btn-primary mt-3" disabled={busy} onClick={() => void act(() => api.createShare(designId), 'New read-only link made.', (s) => void copyText(s.url))}>
+          <button type="button" className="cw-btn cw-btn-primary mt-3" disabled={busy} onClick={() => void act(() => createShare.mutateAsync(), 'New read-only link made.', (s) => void copyText(s.url))}>
             Make a read-only link
           </button>
           <ul className="mt-4 space-y-2" aria-label="Live links">
@@ -222,7 +229,7 @@ export default function PeoplePanel({ designId, designName, myUserId, isOwner, v
               <li key={s.token} className="flex flex-wrap items-center gap-2 rounded-lg border border-rule bg-panel px-3 py-2" data-share-url={s.url}>
                 <input className="cw-input min-w-0 flex-1 font-mono text-sm" readOnly value={s.url} aria-label="Share link" onFocus={(e) => e.currentTarget.select()} />
                 <button type="button" className="cw-btn cw-btn-quiet cw-btn-small" onClick={() => void copyLink(s.url)}>Copy</button>
-                <button type="button" className="cw-btn cw-btn-quiet cw-btn-small" disabled={busy} onClick={() => void act(() => api.revokeShare(designId, s.token), 'Link revoked; it no longer opens the design.')}>
+                <button type="button" className="cw-btn cw-btn-quiet cw-btn-small" disabled={busy} onClick={() => void act(() => revokeShare.mutateAsync(s.token), 'Link revoked; it no longer opens the design.')}>
                   Revoke
                 </button>
               </li>
@@ -244,7 +251,7 @@ export default function PeoplePanel({ designId, designName, myUserId, isOwner, v
             onClick={() => {
               const h = heir;
               setHeir(null);
-              if (h) void act(() => api.transferOwnership(designId, h.userId), `${h.name} now owns the design.`, () => window.location.reload());
+              if (h) void act(() => transfer.mutateAsync(h.userId), `${h.name} now owns the design.`, () => window.location.reload());
             }}
           >
             Hand over
@@ -254,3 +261,5 @@ export default function PeoplePanel({ designId, designName, myUserId, isOwner, v
     </div>
   );
 }
+
+export default withApi(PeoplePanel);

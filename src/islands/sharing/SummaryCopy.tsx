@@ -1,22 +1,29 @@
 import { useState } from 'react';
-import { call } from '~/lib/library/api-call';
+import { failureMessage } from '~/lib/api/client';
+import { withApi } from '~/lib/api/provider';
+import { useFetchSummary } from '~/lib/api/queries/designs';
 import { copyText } from './copy-text';
 
 type Props = { /** e.g. /api/v1/designs/ID/summary or /api/v1/shared/TOKEN/summary */ endpoint: string };
 
 /** One-click copy of the review summary, as plain text or Markdown, for a forum post. */
-export default function SummaryCopy({ endpoint }: Props) {
+function SummaryCopy({ endpoint }: Props) {
   const [status, setStatus] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [preview, setPreview] = useState<string | null>(null);
+  const summary = useFetchSummary();
 
   async function copy(format: 'text' | 'markdown') {
     setStatus(null);
     setError(null);
-    const r = await call<string>('GET', `${endpoint}?format=${format}`);
-    if (!r.ok) return setError(r.message);
-    setPreview(r.data);
-    const done = await copyText(r.data);
+    let text: string;
+    try {
+      text = await summary.mutateAsync({ endpoint, format });
+    } catch (e) {
+      return setError(failureMessage(e));
+    }
+    setPreview(text);
+    const done = await copyText(text);
     if (done) setStatus(format === 'markdown' ? 'Markdown summary copied.' : 'Plain-text summary copied.');
     else setError('Your browser did not allow copying; select the text below and copy it by hand.');
   }
@@ -46,3 +53,5 @@ export default function SummaryCopy({ endpoint }: Props) {
     </div>
   );
 }
+
+export default withApi(SummaryCopy);

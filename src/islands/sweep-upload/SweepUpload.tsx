@@ -1,6 +1,8 @@
 import { useState, type ChangeEvent } from 'react';
 import { findResonances, parseSweepFile, type Resonance } from '../../lib/touchstone';
-import { createMeasurement, request } from '../bench/api';
+import { failureMessage } from '~/lib/api/client';
+import { withApi } from '~/lib/api/provider';
+import { useCreateMeasurement, useUploadAttachment } from '~/lib/api/queries/bench';
 import SweepChart, { type ChartPoint } from './SweepChart';
 
 type Props = {
@@ -15,13 +17,15 @@ type Props = {
 const MAX_POINTS = 2000;
 
 /** Reads a Touchstone or CSV sweep in the browser, finds its resonances and offers to record one. */
-export default function SweepUpload({ designId, canWrite, predictedLoaded, predictedBare, calibratedLoaded, today }: Props) {
+function SweepUpload({ designId, canWrite, predictedLoaded, predictedBare, calibratedLoaded, today }: Props) {
   const [file, setFile] = useState<File | null>(null);
   const [points, setPoints] = useState<ChartPoint[]>([]);
   const [label, setLabel] = useState('');
   const [resonances, setResonances] = useState<Resonance[]>([]);
   const [error, setError] = useState<string | null>(null);
   const [status, setStatus] = useState<string | null>(null);
+  const createMeasurement = useCreateMeasurement(designId);
+  const upload = useUploadAttachment(designId);
 
   async function choose(e: ChangeEvent<HTMLInputElement>) {
     const f = e.target.files?.[0] ?? null;
@@ -52,22 +56,25 @@ export default function SweepUpload({ designId, canWrite, predictedLoaded, predi
   }
 
   async function record(r: Resonance, kind: 'loaded-frequency' | 'bare-frequency') {
-    const res = await createMeasurement(designId, {
+    const res = createMeasurement.mutateAsync({
       kind,
       value: r.frequency,
       measuredAt: today,
       instrument: 'swept measurement',
       notes: `${r.kind} in ${file?.name ?? 'a sweep'}${r.q !== null ? `, Q ${r.q.toFixed(1)}` : ''}`,
     });
-    setStatus(res.ok ? `Recorded ${(r.frequency / 1e3).toFixed(2)} kHz in the bench log; reload to see it in the table.` : res.message);
+    await res.then(
+      () => setStatus(`Recorded ${(r.frequency / 1e3).toFixed(2)} kHz in the bench log; reload to see it in the table.`),
+      (e) => setStatus(failureMessage(e)),
+    );
   }
 
   async function attach() {
     if (!file) return;
-    const body = new FormData();
-    body.set('file', file);
-    const r = await request<{ fileName: string }>('POST', `/api/v1/designs/${designId}/attachments`, body);
-    setStatus(r.ok ? `Attached ${r.data.fileName} to the design.` : r.message);
+    await upload.mutateAsync(file).then(
+      (r) => setStatus(`Attached ${r.fileName} to the design.`),
+      (e) => setStatus(failureMessage(e)),
+    );
   }
 
   const near = (f: number | null) => (f === null ? null : f / 1e3);
@@ -140,3 +147,6 @@ export default function SweepUpload({ designId, canWrite, predictedLoaded, predi
     </div>
   );
 }
+
+/** Reads a Touchstone or CSV sweep in the browser, finds its resonances and offers to record one. */
+export default withApi(SweepUpload);

@@ -1,33 +1,12 @@
-import { z } from 'zod';
+import type { z } from 'zod';
+import type { calibrationBodySchema, StoredCalibration } from '../api/contracts/measurements';
 import { inductanceForResonance, solveTap, type DesignSI, type Result } from '../../solver';
 import { minimumTap, primaryInductanceAtTap } from '../../solver/system/primary';
 
-/** Measured values a builder adopted in place of the predictions. SI units; null clears a value. */
-export const calibrationSchema = z
-  .object({
-    loadedFrequency: z
-      .number({ error: 'Give the measured loaded frequency in Hz, or null to clear it.' })
-      .positive('The loaded frequency must be above 0 Hz.')
-      .max(100e6, 'A loaded frequency above 100 MHz is not a coil’s.')
-      .nullable()
-      .optional(),
-    tankCapacitance: z
-      .number({ error: 'Give the measured tank capacitance in F, or null to clear it.' })
-      .positive('The tank capacitance must be above 0 F.')
-      .max(1e-3, 'A tank capacitance above 1 mF is not plausible.')
-      .nullable()
-      .optional(),
-    coupling: z
-      .number({ error: 'Give the measured coupling coefficient k (0–1), or null to clear it.' })
-      .gt(0, 'k must be above 0.')
-      .lt(1, 'k must be below 1.')
-      .nullable()
-      .optional(),
-  })
-  .strict();
-
-export type CalibrationInput = z.infer<typeof calibrationSchema>;
-export type Calibration = { loadedFrequency?: number; tankCapacitance?: number; coupling?: number };
+/** Measured values a builder adopted in place of the predictions: the request body and the stored form. */
+export { calibrationBodySchema as calibrationSchema } from '../api/contracts/measurements';
+export type CalibrationInput = z.output<typeof calibrationBodySchema>;
+export type Calibration = StoredCalibration;
 
 /** Merges an update into stored calibration: a number sets, null clears, absent keeps. */
 export function mergeCalibration(stored: Calibration, update: CalibrationInput): Calibration {

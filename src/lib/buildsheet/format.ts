@@ -1,8 +1,8 @@
 /** Display formatting for the build sheet: metric first, inches or feet in brackets, no NaN ever shown. */
 
-const IN = 0.0254;
-const FT = 0.3048;
-const LB = 0.45359237;
+import { METRES_PER_FOOT as FT, METRES_PER_INCH as IN } from '../format/length';
+import { KILOGRAMS_PER_POUND as LB } from '../format/quantity';
+import { formatSi } from '../format/si';
 
 function fixed(x: number, digits: number): string {
   return Number.isFinite(x) ? x.toFixed(digits) : '—';
@@ -50,30 +50,12 @@ export function duration(s: number): string {
   return h > 0 ? `${h} h ${min} min` : `${min} min ${sec} s`;
 }
 
-export function frequency(hz: number): string {
-  return hz >= 1e6 ? `${plain(hz / 1e6, 4)} MHz` : `${plain(hz / 1e3, 4)} kHz`;
-}
-
-export function capacitance(f: number): string {
-  if (f >= 1e-6) return `${plain(f * 1e6, 4)} µF`;
-  if (f >= 1e-9) return `${plain(f * 1e9, 4)} nF`;
-  return `${plain(f * 1e12, 4)} pF`;
-}
-
-export function inductance(h: number): string {
-  if (h >= 1e-3) return `${plain(h * 1e3, 4)} mH`;
-  return `${plain(h * 1e6, 4)} µH`;
-}
-
-export function voltage(v: number): string {
-  return v >= 1000 ? `${plain(v / 1000, 4)} kV` : `${plain(v, 4)} V`;
-}
-
-export function resistance(ohm: number): string {
-  if (ohm >= 1e6) return `${plain(ohm / 1e6, 3)} MΩ`;
-  if (ohm >= 1e3) return `${plain(ohm / 1e3, 3)} kΩ`;
-  return `${plain(ohm, 3)} Ω`;
-}
+// the app's one SI formatter, limited to the prefixes a build sheet reads in
+export const frequency = (hz: number): string => formatSi(hz, 'Hz', 4, ['k', 'M']);
+export const capacitance = (f: number): string => formatSi(f, 'F', 4, ['p', 'n', 'µ']);
+export const inductance = (h: number): string => formatSi(h, 'H', 4, ['µ', 'm']);
+export const voltage = (v: number): string => formatSi(v, 'V', 4, ['', 'k']);
+export const resistance = (ohm: number): string => formatSi(ohm, 'Ω', 3, ['', 'k', 'M']);
 
 export function power(w: number): string {
   return `${plain(w, 3)} W`;

@@ -1,4 +1,5 @@
 import * as fmt from './format';
+import { METRES_PER_INCH } from '../format/length';
 import { BANK_NOTES, COATING_NOTES, SAFETY_CHECKLIST, SOLID_STATE_NOTES, TRANSFORMER_PROTECTION_NOTES, WINDING_NOTES, type SheetNote } from './notes';
 import type { BuildSheet } from './sheet';
 
@@ -42,7 +43,7 @@ export function sheetSections(sheet: BuildSheet): SheetSection[] {
         { label: 'Winding length', value: fmt.lengthShort(s.windingLength) },
         { label: 'Turns', value: String(s.turns) },
         { label: 'Wire', value: wire, note: `${fmt.lengthFine(s.insulatedDiameter)} over the enamel` },
-        { label: 'Turns per length', value: `${fmt.sig(s.turnsPerMetre / 100, 4)} per cm (${fmt.sig(s.turnsPerMetre * 0.0254, 4)} per in)`, note: `pitch ${fmt.lengthFine(s.pitch)}` },
+        { label: 'Turns per length', value: `${fmt.sig(s.turnsPerMetre / 100, 4)} per cm (${fmt.sig(s.turnsPerMetre * METRES_PER_INCH, 4)} per in)`, note: `pitch ${fmt.lengthFine(s.pitch)}` },
         { label: 'Wire length (computed)', value: fmt.lengthLong(s.wireLength) },
         { label: 'Wire to buy', value: fmt.lengthLong(s.wireToBuy), note: `with ${fmt.percent(o.margin, 0)} extra for leads and mistakes` },
         { label: 'Copper mass (computed)', value: fmt.mass(s.wireMass) },

@@ -2,7 +2,7 @@ import { copperMass, BLEEDER_RESISTANCE_PER_UNIT, resistorPower, supplyPeakVolta
 import { calibratedTuning, type Calibration, type CalibratedTuning } from './calibration';
 import { suggestSpool, type SpoolSuggestion } from './spool';
 
-const INCH = 0.0254;
+import { METRES_PER_INCH as INCH } from '../format/length';
 
 /** Bare form left at each end of the winding: at least 1 in (R. Quick, "COILBLD1" building notes, 1990s, lab-tesla.org; common practice). */
 export const MIN_END_MARGIN = 1 * INCH;

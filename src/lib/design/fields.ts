@@ -1,17 +1,12 @@
 import { z } from 'zod';
-import { parseQuantity, QUANTITY_KINDS, type QuantityKind } from './units';
+import { QUANTITY_KINDS, type QuantityKind } from '../format/units';
+import { parseQuantity } from '../format/units-mathjs';
+import { designField, type Bounds, type PathOfKind } from './registry';
+
+export type { Bounds };
 
 /** A quantity as a user gives it: a number in SI base units or a string with a unit. */
 export type QuantityInput = number | string;
-
-export interface Bounds {
-  /** smallest accepted value in SI; `minInclusive` decides whether it is itself allowed */
-  min: number;
-  max: number;
-  minInclusive?: boolean;
-  /** the bounds as people say them, for the message */
-  label: string;
-}
 
 const typeError = (noun: string, examples: string) => (iss: { input: unknown }) =>
   iss.input === undefined
@@ -72,4 +67,19 @@ export function si(v: QuantityInput, kind: QuantityKind): number {
   const r = parseQuantity(v, kind);
   if (!r.ok) throw new RangeError(r.message);
   return r.value;
+}
+
+type QuantityPath = PathOfKind<QuantityKind>;
+type NumberPath = PathOfKind<'count' | 'ratio' | 'gauge'>;
+
+/** The schema of a quantity field, from its registry entry (kind, bounds, description). */
+export function quantityField(path: QuantityPath) {
+  const f = designField(path);
+  return quantity(f.kind as QuantityKind, f.bounds!, f.help);
+}
+
+/** The schema of a plain-number field (count, gauge, ratio), from its registry entry. */
+export function numberField(path: NumberPath) {
+  const f = designField(path);
+  return count(f.bounds!, f.help, f.integer === true);
 }

@@ -1,71 +1,52 @@
 import { z } from 'zod';
-import { AWG_MAX, AWG_MIN } from '../../solver/wire/awg';
-import { count, quantity } from './fields';
+import { numberField, quantityField } from './fields';
+import { designField, KNOWN_FIELD_NAMES } from './registry';
+import { checkDesignName, DESIGN_NAME_REQUIRED } from './name';
 
-const DEG = Math.PI / 180;
-
-// Physical bounds: wide enough for any coil a person builds, narrow enough to catch unit slips.
-const b = {
-  formDiameter: { min: 5e-3, max: 3, minInclusive: true, label: 'between 5 mm and 3 m' },
-  wireDiameter: { min: 10e-6, max: 12e-3, minInclusive: true, label: 'between 0.01 mm and 12 mm' },
-  windingLength: { min: 1e-3, max: 10, minInclusive: true, label: 'between 1 mm and 10 m' },
-  elevation: { min: -5, max: 5, minInclusive: true, label: 'between −5 m and 5 m' },
-  groundClearance: { min: 0, max: 20, minInclusive: true, label: 'between 0 and 20 m' },
-  toploadDiameter: { min: 1e-2, max: 10, minInclusive: true, label: 'between 1 cm and 10 m' },
-  primaryInnerDiameter: { min: 5e-3, max: 10, minInclusive: true, label: 'between 5 mm and 10 m' },
-  conductorDiameter: { min: 0.1e-3, max: 0.1, minInclusive: true, label: 'between 0.1 mm and 10 cm' },
-  spacing: { min: 0, max: 0.5, minInclusive: true, label: 'between 0 and 50 cm' },
-  angle: { min: 0, max: 90 * DEG, minInclusive: false, label: 'greater than 0 and less than 90 deg (a plain number is read in radians)' },
-  capacitance: { min: 1e-12, max: 1e-3, minInclusive: true, label: 'between 1 pF and 1 mF' },
-  tankVoltage: { min: 1, max: 2e6, minInclusive: true, label: 'between 1 V and 2 MV' },
-  supplyVoltage: { min: 1, max: 1e6, minInclusive: true, label: 'between 1 V and 1 MV' },
-  supplyCurrent: { min: 1e-6, max: 1e4, minInclusive: true, label: 'between 1 µA and 10 kA' },
-  lineFrequency: { min: 1, max: 2000, minInclusive: true, label: 'between 1 Hz and 2 kHz' },
-  breakRate: { min: 1, max: 1e5, minInclusive: true, label: 'between 1 and 100 000 per second' },
-  streamerCapacitance: { min: 0, max: 1e-9, minInclusive: true, label: 'between 0 and 1 nF' },
-  streamerLength: { min: 0, max: 50, minInclusive: true, label: 'between 0 and 50 m' },
-  secondaryTurns: { min: 1, max: 20000, minInclusive: true, label: 'a whole number from 1 to 20000' },
-  primaryTurns: { min: 0.25, max: 200, minInclusive: true, label: 'between 0.25 and 200 (fractions allowed)' },
-  awg: { min: AWG_MIN, max: AWG_MAX, minInclusive: true, label: `a whole gauge from ${AWG_MIN} (0000) to ${AWG_MAX}` },
-  series: { min: 1, max: 10000, minInclusive: true, label: 'a whole number from 1 to 10000' },
-  coupling: { min: 0, max: 0.9, minInclusive: false, label: 'greater than 0 and at most 0.9' },
-} as const;
+/** A design's name as the API takes it: trimmed, with the one name rule. */
+export const designNameSchema = z
+  .string({ error: DESIGN_NAME_REQUIRED })
+  .trim()
+  .superRefine((name, ctx) => {
+    const message = checkDesignName(name);
+    if (message) ctx.addIssue({ code: 'custom', message });
+  });
 
 export const wireAwgSchema = z
   .strictObject({
-    awg: count(b.awg, 'American Wire Gauge per ASTM B258 (0 = AWG 0, −3 = AWG 0000)', true),
+    awg: numberField('secondary.wire.awg'),
     insulation: z
       .enum(['bare', 'single', 'heavy'], { error: (iss) => (iss.input === undefined ? 'is required' : 'expected "bare", "single" or "heavy"') })
-      .describe('enamel build; the insulated diameter comes from a typical film-build table (from memory)'),
+      .describe(designField('secondary.wire.insulation').help),
   })
   .describe('magnet wire by gauge');
 
 export const wireDiameterSchema = z
   .strictObject({
-    diameter: quantity('length', b.wireDiameter, 'bare copper diameter'),
-    insulatedDiameter: quantity('length', b.wireDiameter, 'outside diameter over the insulation'),
+    diameter: quantityField('secondary.wire.diameter'),
+    insulatedDiameter: quantityField('secondary.wire.insulatedDiameter'),
   })
   .describe('wire by measured diameters');
 
 export const secondarySchema = z.strictObject({
-  formDiameter: quantity('length', b.formDiameter, 'outer diameter of the coil form'),
-  turns: count(b.secondaryTurns, 'turns of the secondary winding', true),
+  formDiameter: quantityField('secondary.formDiameter'),
+  turns: numberField('secondary.turns'),
   wire: z.union([wireAwgSchema, wireDiameterSchema], { error: (iss) => (iss.input === undefined ? 'is required' : 'expected { awg, insulation } or { diameter, insulatedDiameter }') }),
-  windingLength: quantity('length', b.windingLength, 'length of the winding; default close-wound, turns × insulated diameter').optional(),
-  elevation: quantity('length', b.elevation, 'bottom of the winding above the primary reference plane; default 0').optional(),
+  windingLength: quantityField('secondary.windingLength').optional(),
+  elevation: quantityField('secondary.elevation').optional(),
 });
 
 export const toroidSchema = z.strictObject({
   shape: z.literal('toroid'),
-  majorDiameter: quantity('length', b.toploadDiameter, 'overall outside diameter'),
-  minorDiameter: quantity('length', b.toploadDiameter, 'tube (cross-section) diameter'),
-  elevation: quantity('length', b.elevation, 'centre of the topload above the top of the winding; default 0').optional(),
+  majorDiameter: quantityField('topload.majorDiameter'),
+  minorDiameter: quantityField('topload.minorDiameter'),
+  elevation: quantityField('topload.elevation').optional(),
 });
 
 export const sphereSchema = z.strictObject({
   shape: z.literal('sphere'),
-  diameter: quantity('length', b.toploadDiameter, 'sphere diameter'),
-  elevation: quantity('length', b.elevation, 'centre of the topload above the top of the winding; default 0').optional(),
+  diameter: quantityField('topload.diameter'),
+  elevation: quantityField('topload.elevation').optional(),
 });
 
 export const toploadSchema = z.discriminatedUnion('shape', [toroidSchema, sphereSchema], {
@@ -76,12 +57,12 @@ export const primarySchema = z
   .strictObject({
     shape: z
       .enum(['flat', 'helical', 'conical'], { error: (iss) => (iss.input === undefined ? 'is required' : 'expected "flat", "helical" or "conical"') }),
-    innerDiameter: quantity('length', b.primaryInnerDiameter, 'centre-line diameter of the innermost turn'),
-    turns: count(b.primaryTurns, 'turns of the primary', false),
-    conductorDiameter: quantity('length', b.conductorDiameter, 'diameter of the primary conductor (tube or wire)'),
-    spacing: quantity('length', b.spacing, 'gap between neighbouring conductor surfaces'),
-    angle: quantity('angle', b.angle, 'conical only: rise of the cone above horizontal').optional(),
-    elevation: quantity('length', b.elevation, 'height of the innermost turn above the primary reference plane; default 0').optional(),
+    innerDiameter: quantityField('primary.innerDiameter'),
+    turns: numberField('primary.turns'),
+    conductorDiameter: quantityField('primary.conductorDiameter'),
+    spacing: quantityField('primary.spacing'),
+    angle: quantityField('primary.angle').optional(),
+    elevation: quantityField('primary.elevation').optional(),
   })
   .superRefine((p, ctx) => {
     if (p.shape === 'conical' && p.angle === undefined) {
@@ -93,14 +74,14 @@ export const primarySchema = z
   });
 
 export const tankSingleSchema = z.strictObject({
-  capacitance: quantity('capacitance', b.capacitance, 'tank capacitance'),
+  capacitance: quantityField('tank.capacitance'),
 });
 
 export const tankBankSchema = z.strictObject({
-  unitCapacitance: quantity('capacitance', b.capacitance, 'capacitance of each capacitor'),
-  unitVoltage: quantity('voltage', b.tankVoltage, 'DC voltage rating of each capacitor'),
-  series: count(b.series, 'capacitors in each string', true),
-  parallel: count(b.series, 'strings in parallel', true),
+  unitCapacitance: quantityField('tank.unitCapacitance'),
+  unitVoltage: quantityField('tank.unitVoltage'),
+  series: numberField('tank.series'),
+  parallel: numberField('tank.parallel'),
 });
 
 export const tankSchema = z.union([tankSingleSchema, tankBankSchema], {
@@ -110,15 +91,15 @@ export const tankSchema = z.union([tankSingleSchema, tankBankSchema], {
 
 export const transformerSupplySchema = z.strictObject({
   kind: z.literal('transformer'),
-  voltage: quantity('voltage', b.supplyVoltage, 'RMS output voltage'),
-  current: quantity('current', b.supplyCurrent, 'RMS rated (short-circuit) output current'),
-  lineFrequency: quantity('frequency', b.lineFrequency, 'mains frequency'),
-  breakRate: quantity('frequency', b.breakRate, 'spark-gap firings per second; default twice the line frequency').optional(),
+  voltage: quantityField('supply.voltage'),
+  current: quantityField('supply.current'),
+  lineFrequency: quantityField('supply.lineFrequency'),
+  breakRate: quantityField('supply.breakRate').optional(),
 });
 
 export const solidStateSupplySchema = z.strictObject({
   kind: z.literal('solid-state'),
-  busVoltage: quantity('voltage', b.supplyVoltage, 'DC bus voltage'),
+  busVoltage: quantityField('supply.busVoltage'),
 });
 
 export const supplySchema = z.discriminatedUnion('kind', [transformerSupplySchema, solidStateSupplySchema], {
@@ -127,9 +108,9 @@ export const supplySchema = z.discriminatedUnion('kind', [transformerSupplySchem
 
 export const tuningSchema = z
   .strictObject({
-    streamerCapacitance: quantity('capacitance', b.streamerCapacitance, 'allowance for streamer loading; default 0').optional(),
-    streamerLength: quantity('length', b.streamerLength, 'expected streamer length; gives 1 pF per foot when no capacitance is given').optional(),
-    targetCoupling: count(b.coupling, 'coupling coefficient to find a secondary elevation for', false).optional(),
+    streamerCapacitance: quantityField('tuning.streamerCapacitance').optional(),
+    streamerLength: quantityField('tuning.streamerLength').optional(),
+    targetCoupling: numberField('tuning.targetCoupling').optional(),
   })
   .superRefine((t, ctx) => {
     if (t.streamerCapacitance !== undefined && t.streamerLength !== undefined) {
@@ -143,7 +124,7 @@ export const tuningSchema = z
  */
 export const designInputSchema = z.strictObject({
   secondary: secondarySchema,
-  groundClearance: quantity('length', b.groundClearance, 'height of the primary reference plane above the ground; default 0.5 m').optional(),
+  groundClearance: quantityField('groundClearance').optional(),
   topload: toploadSchema.nullable().optional(),
   primary: primarySchema.nullable().optional(),
   tank: tankSchema.nullable().optional(),
@@ -154,10 +135,4 @@ export const designInputSchema = z.strictObject({
 export type DesignInput = z.input<typeof designInputSchema>;
 
 /** Every field name the schema knows, for "did you mean" hints on unknown keys. */
-export const KNOWN_FIELDS: readonly string[] = [
-  'secondary', 'formDiameter', 'turns', 'wire', 'awg', 'insulation', 'diameter', 'insulatedDiameter', 'windingLength',
-  'elevation', 'groundClearance', 'topload', 'shape', 'majorDiameter', 'minorDiameter', 'primary', 'innerDiameter',
-  'conductorDiameter', 'spacing', 'angle', 'tank', 'capacitance', 'unitCapacitance', 'unitVoltage', 'series', 'parallel',
-  'supply', 'kind', 'voltage', 'current', 'lineFrequency', 'breakRate', 'busVoltage', 'tuning', 'streamerCapacitance',
-  'streamerLength', 'targetCoupling',
-];
+export const KNOWN_FIELDS: readonly string[] = KNOWN_FIELD_NAMES;

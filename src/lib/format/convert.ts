@@ -1,32 +1,22 @@
-import { lengthInputText, METRES_PER_FOOT, METRES_PER_INCH, type UnitSystem } from './length';
+import { lengthInputText, type UnitSystem } from './length';
+import { readSimpleQuantity } from './units';
 
-// Lengths as builders type them, for display conversion only; the design schema remains the judge of
-// what is valid. Kept free of the full unit parser so the page can show converted values without it.
-const LENGTH_UNITS: Record<string, { metres: number; system: UnitSystem }> = {
-  mm: { metres: 1e-3, system: 'metric' },
-  cm: { metres: 1e-2, system: 'metric' },
-  m: { metres: 1, system: 'metric' },
-  km: { metres: 1e3, system: 'metric' },
-  in: { metres: METRES_PER_INCH, system: 'imperial' },
-  inch: { metres: METRES_PER_INCH, system: 'imperial' },
-  inches: { metres: METRES_PER_INCH, system: 'imperial' },
-  ft: { metres: METRES_PER_FOOT, system: 'imperial' },
-  foot: { metres: METRES_PER_FOOT, system: 'imperial' },
-  feet: { metres: METRES_PER_FOOT, system: 'imperial' },
-};
-
-const NUMBER = String.raw`[-+]?(?:\d+(?:[.,]\d*)?|[.,]\d+)(?:e[-+]?\d+)?`;
-const PATTERN = new RegExp(String.raw`^\s*(${NUMBER})\s*([a-z]+)\s*$`, 'i');
-
-/** Reads "4.5 in", "114 mm" or "0,6 m" into metres; null for anything else. */
+/** Reads "4.5 in", "114 mm" or "0,6 m" into metres with the unit system it was written in; null for anything else. */
 export function readLength(text: string): { metres: number; system: UnitSystem } | null {
-  const m = PATTERN.exec(text);
-  if (!m) return null;
-  const unit = LENGTH_UNITS[m[2].toLowerCase()];
-  if (!unit) return null;
-  const value = Number(m[1].replace(',', '.'));
-  if (!Number.isFinite(value)) return null;
-  return { metres: value * unit.metres, system: unit.system };
+  const q = readSimpleQuantity(text);
+  if (!q || q.unit.kind !== 'length' || !q.unit.system) return null;
+  return { metres: q.value, system: q.unit.system };
+}
+
+// what each converted text was converted from, so that switching back returns exactly what was typed;
+// bounded, because a long session converts many texts
+const ORIGINS_KEPT = 500;
+const origins = new Map<string, string>();
+
+function remember(converted: string, typed: string): void {
+  origins.delete(converted);
+  origins.set(converted, typed);
+  if (origins.size > ORIGINS_KEPT) origins.delete(origins.keys().next().value as string);
 }
 
 /**
@@ -37,12 +27,9 @@ export function readLength(text: string): { metres: number; system: UnitSystem }
 export function convertLengthText(text: string, system: UnitSystem): string {
   const parsed = readLength(text);
   if (!parsed || parsed.system === system) return text;
-  // switching back returns exactly what was typed, so toggling units never drifts a value
   const earlier = origins.get(text.trim());
   if (earlier && readLength(earlier)?.system === system) return earlier;
   const converted = lengthInputText(parsed.metres, system);
-  origins.set(converted, text.trim());
+  remember(converted, text.trim());
   return converted;
 }
-
-const origins = new Map<string, string>();

@@ -1,4 +1,4 @@
-export { MISSING, formatSignificant, formatFixed, formatPercent } from './number';
+export { MISSING, formatSignificant, formatFixed, formatPercent, formatTurns } from './number';
 export { siParts, formatSi } from './si';
 export {
   METRES_PER_INCH,
@@ -10,5 +10,17 @@ export {
   type UnitSystem,
   type LengthParts,
 } from './length';
-export { formatQuantity, axisUnit, type DisplayKind, type FormatOptions } from './quantity';
+export { formatQuantity, axisUnit, siUnitOfDisplay, type DisplayKind, type FormatOptions } from './quantity';
 export { convertLengthText, readLength } from './convert';
+export { formatDate } from './date';
+export {
+  QUANTITY_KINDS,
+  SIMPLE_UNITS,
+  parseQuantityQuick,
+  readSimpleQuantity,
+  siFactor,
+  type QuantityKind,
+  type QuantityParse,
+  type SimpleUnit,
+} from './units';
+export { parseQuantityLazy } from './units-lazy';

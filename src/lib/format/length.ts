@@ -1,9 +1,13 @@
 import { formatSignificant, MISSING } from './number';
 
-export type UnitSystem = 'metric' | 'imperial';
+/** The two ways lengths are shown; a user's preference. */
+export const UNIT_SYSTEMS = ['metric', 'imperial'] as const;
+export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
 
-/** Exact by definition: the international inch (1959), NIST SP 811 (2008) Appendix B.8. */
-export const METRES_PER_INCH = 0.0254;
+import { METRES_PER_INCH } from '../../solver/constants';
+
+export { METRES_PER_INCH };
+/** Exact by definition: the international foot (1959), NIST SP 811 (2008) Appendix B.8. */
 export const METRES_PER_FOOT = 0.3048;
 
 export interface LengthParts {

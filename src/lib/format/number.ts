@@ -28,3 +28,9 @@ export function formatPercent(ratio: number, decimals = 1): string {
   if (!Number.isFinite(ratio)) return MISSING;
   return `${formatFixed(ratio * 100, decimals)} %`;
 }
+
+/** Turns to two decimals at most: 12.5 → "12.5 turns". */
+export function formatTurns(x: number | null | undefined): string {
+  if (x === null || x === undefined || !Number.isFinite(x)) return MISSING;
+  return `${Number(x.toFixed(2))} turns`;
+}

@@ -1,6 +1,6 @@
-import { formatFixed, formatSignificant, MISSING } from './number';
+import { formatFixed, formatSignificant, formatTurns, MISSING } from './number';
 import { formatSi } from './si';
-import { formatLength, type UnitSystem } from './length';
+import { formatLength, METRES_PER_INCH, type UnitSystem } from './length';
 
 /** The result quantities the designer shows, each with the unit and precision a builder reads it in. */
 export type DisplayKind =
@@ -26,6 +26,9 @@ export interface FormatOptions {
   system?: UnitSystem;
   digits?: number;
 }
+
+/** Exact by definition: the avoirdupois pound (1959), NIST SP 811 (2008) Appendix B.8. */
+export const KILOGRAMS_PER_POUND = 0.45359237;
 
 const CAPACITANCE_PREFIXES = ['p', 'n', 'µ', 'm', ''] as const;
 const INDUCTANCE_PREFIXES = ['n', 'µ', 'm', ''] as const;
@@ -55,7 +58,7 @@ export function formatQuantity(x: number | null | undefined, kind: DisplayKind, 
     case 'time':
       return formatSi(x, 's', digits);
     case 'mass':
-      return system === 'imperial' ? `${formatSignificant(x / 0.45359237, digits - 1)} lb` : x < 1 ? `${formatSignificant(x * 1000, digits - 1)} g` : `${formatSignificant(x, digits - 1)} kg`;
+      return system === 'imperial' ? `${formatSignificant(x / KILOGRAMS_PER_POUND, digits - 1)} lb` : x < 1 ? `${formatSignificant(x * 1000, digits - 1)} g` : `${formatSignificant(x, digits - 1)} kg`;
     case 'length':
       return formatLength(x, system, digits);
     case 'wireLength':
@@ -65,7 +68,7 @@ export function formatQuantity(x: number | null | undefined, kind: DisplayKind, 
     case 'coupling':
       return formatFixed(x, 3);
     case 'turns':
-      return formatFixed(x, 2);
+      return formatTurns(x);
     case 'count':
       return formatFixed(x, 0);
     case 'angle':
@@ -84,7 +87,7 @@ export function axisUnit(kind: DisplayKind, system: UnitSystem = 'metric'): { un
       return { unit: 'pF', factor: 1e12 };
     case 'length':
     case 'wireLength':
-      return system === 'imperial' ? { unit: 'in', factor: 1 / 0.0254 } : { unit: 'mm', factor: 1e3 };
+      return system === 'imperial' ? { unit: 'in', factor: 1 / METRES_PER_INCH } : { unit: 'mm', factor: 1e3 };
     case 'time':
       return { unit: 'µs', factor: 1e6 };
     case 'energy':
@@ -98,4 +101,28 @@ export function axisUnit(kind: DisplayKind, system: UnitSystem = 'metric'): { un
     default:
       return { unit: '', factor: 1 };
   }
+}
+
+/** The SI unit a value of each display kind is in ('' for plain numbers). */
+export function siUnitOfDisplay(kind: DisplayKind): string {
+  const units: Record<DisplayKind, string> = {
+    frequency: 'Hz',
+    inductance: 'H',
+    capacitance: 'F',
+    resistance: 'Ω',
+    voltage: 'V',
+    current: 'A',
+    energy: 'J',
+    power: 'W',
+    time: 's',
+    mass: 'kg',
+    length: 'm',
+    wireLength: 'm',
+    ratio: '',
+    coupling: '',
+    turns: 'turns',
+    count: '',
+    angle: 'rad',
+  };
+  return units[kind];
 }

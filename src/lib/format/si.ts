@@ -18,11 +18,16 @@ export interface SiParts {
   prefix: string;
 }
 
+/** Units that read wrong with a prefix: nobody writes "k turns" or "mkg". */
+const UNPREFIXED = new Set(['', '1', 'turns', '%', 'kg']);
+/** Lengths above a metre stay in metres: kilometres of wire read oddly to a builder. */
+const METRE_PREFIXES = PREFIXES.filter((p) => p.exponent <= 0).map((p) => p.symbol);
+
 /**
- * Chooses the SI prefix that puts the value between 1 and 1000 (the engineering convention), limited to
- * `allowed` when given (e.g. capacitance in pF/nF/µF only).
+ * Chooses the SI prefix that puts the value, rounded to `digits` significant figures, between 1 and 1000
+ * (the engineering convention), limited to `allowed` when given (e.g. capacitance in pF/nF/µF only).
  */
-export function siParts(x: number, allowed?: readonly string[]): SiParts {
+export function siParts(x: number, allowed?: readonly string[], digits = 4): SiParts {
   const choices = allowed ? PREFIXES.filter((p) => allowed.includes(p.symbol)) : PREFIXES;
   if (x === 0 || !Number.isFinite(x)) return { value: x, prefix: choices.find((p) => p.exponent === 0)?.symbol ?? choices[0].symbol };
   const e = Math.log10(Math.abs(x));
@@ -31,16 +36,20 @@ export function siParts(x: number, allowed?: readonly string[]): SiParts {
   let value = x / 10 ** best.exponent;
   // rounding can carry 999.96 up to 1000: move to the next prefix when there is one
   const next = choices[choices.indexOf(best) + 1];
-  if (next && Math.abs(Number(value.toPrecision(4))) >= 1000) {
+  if (next && Math.abs(Number(value.toPrecision(digits))) >= 1000) {
     best = next;
     value = x / 10 ** best.exponent;
   }
   return { value, prefix: best.symbol };
 }
 
-/** "12.35 kHz", "9.87 mH", "3.3 pF": a value in an SI unit with the fitting prefix. */
+/**
+ * "12.35 kHz", "9.87 mH", "3.3 pF": a value in an SI unit with the fitting prefix, to `digits` significant
+ * figures. Counts, turns, percentages and kilograms take no prefix; metres take none above unity.
+ */
 export function formatSi(x: number | null | undefined, unit: string, digits = 4, allowed?: readonly string[]): string {
   if (x === null || x === undefined || !Number.isFinite(x)) return MISSING;
-  const { value, prefix } = siParts(x, allowed);
+  if (UNPREFIXED.has(unit)) return unit === '' || unit === '1' ? formatSignificant(x, digits) : `${formatSignificant(x, digits)} ${unit}`;
+  const { value, prefix } = siParts(x, allowed ?? (unit === 'm' ? METRE_PREFIXES : undefined), digits);
   return `${formatSignificant(value, digits)} ${prefix}${unit}`;
 }

@@ -1,24 +1,9 @@
-import { keyFigures, figureValue } from './figures';
+import { keyFigures, figureValue, showFigure } from './figures';
 import { flatten, formatInput, inputLabel } from './inputs';
-import { formatSI, formatTurns } from './format';
+import { siUnitOfDisplay } from '../format/quantity';
+import type { FigureChange, InputChange } from '../api/contracts/revisions';
 
-export type InputChange = { path: string; label: string; from: string; to: string };
-export type FigureChange = {
-  key: string;
-  label: string;
-  unit: string;
-  from: number | null;
-  to: number | null;
-  fromText: string;
-  toText: string;
-  /** relative change (to − from) / from; null when either side is missing or from is 0 */
-  relative: number | null;
-  changed: boolean;
-};
-
-function show(value: number | null, unit: string): string {
-  return unit === 'turns' ? formatTurns(value) : formatSI(value, unit);
-}
+export type { InputChange, FigureChange };
 
 /** What changed between two designs' inputs, and what that did to the key results. */
 export function compareDesigns(a: { design: unknown; result: unknown }, b: { design: unknown; result: unknown }) {
@@ -36,7 +21,7 @@ export function compareDesigns(a: { design: unknown; result: unknown }, b: { des
     const from = figureValue(a.result, f);
     const to = figureValue(b.result, f);
     const relative = from !== null && to !== null && from !== 0 ? (to - from) / Math.abs(from) : null;
-    return { key: f.key, label: f.label, unit: f.unit, from, to, fromText: show(from, f.unit), toText: show(to, f.unit), relative, changed: from !== to };
+    return { key: f.key, label: f.label, unit: siUnitOfDisplay(f.kind), from, to, fromText: showFigure(f, from), toText: showFigure(f, to), relative, changed: from !== to };
   });
   return { inputs, figures };
 }

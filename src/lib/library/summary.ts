@@ -1,6 +1,8 @@
-import { figureValue, keyFigures, pick } from './figures';
+import { DESIGN_PARTS } from '../design/registry';
+import type { Result } from '../../solver/types';
+import { figureValue, keyFigures, LIBRARY_DIGITS, showFigure } from './figures';
 import { flatten, formatInput, inputLabel } from './inputs';
-import { formatSI, formatTurns } from './format';
+import { formatSi } from '../format/si';
 
 export type Measured = { kind: string; value: number; unit: string; measuredAt: string; instrument: string | null; notes: string | null };
 export type SummaryInput = {
@@ -14,19 +16,15 @@ export type SummaryInput = {
 };
 export type SummaryFormat = 'text' | 'markdown';
 
-const sections: Array<[string, string]> = [
-  ['secondary', 'Secondary'],
-  ['topload', 'Topload'],
-  ['primary', 'Primary'],
-  ['tank', 'Tank capacitor'],
-  ['supply', 'Supply'],
-  ['tuning', 'Tuning'],
-  ['groundClearance', 'Placement'],
-];
 
 function humanKind(kind: string): string {
   const s = kind.replace(/([a-z])([A-Z])/g, '$1 $2').replace(/[_-]+/g, ' ').toLowerCase();
   return s.charAt(0).toUpperCase() + s.slice(1);
+}
+
+/** A stored result as the solver's type; its sections may be missing, so read it with `?.`. */
+function typedResult(result: unknown): Partial<Result> | null {
+  return result !== null && typeof result === 'object' ? (result as Partial<Result>) : null;
 }
 
 export type SummaryBlock = { title: string; rows: Array<[string, string]> };
@@ -35,7 +33,7 @@ export type SummaryBlock = { title: string; rows: Array<[string, string]> };
 export function summaryBlocks(s: Pick<SummaryInput, 'design' | 'result' | 'measured'>): SummaryBlock[] {
   const flat = flatten(s.design);
   const out: SummaryBlock[] = [];
-  for (const [key, title] of sections) {
+  for (const { key, title } of DESIGN_PARTS) {
     const rows: Array<[string, string]> = [];
     for (const [path, value] of flat) {
       if (path !== key && !path.startsWith(`${key}.`)) continue;
@@ -47,16 +45,16 @@ export function summaryBlocks(s: Pick<SummaryInput, 'design' | 'result' | 'measu
   for (const f of keyFigures) {
     const v = figureValue(s.result, f);
     if (v === null) continue;
-    results.push([f.label, f.unit === 'turns' ? formatTurns(v) : formatSI(v, f.unit)]);
+    results.push([f.label, showFigure(f, v)]);
   }
-  if (pick(s.result, 'tuning.inRange') === false) results.push(['Tap', 'the primary cannot reach the target frequency']);
+  if (typedResult(s.result)?.tuning?.inRange === false) results.push(['Tap', 'the primary cannot reach the target frequency']);
   out.push({ title: 'Predicted (Coilwright)', rows: results.length ? results : [['Results', 'none: the design needs attention']] });
   if (s.measured.length) {
     out.push({
       title: 'Measured',
       rows: s.measured.map((m) => [
         humanKind(m.kind),
-        [formatSI(m.value, m.unit), m.measuredAt.slice(0, 10), m.instrument, m.notes].filter(Boolean).join(' · '),
+        [formatSi(m.value, m.unit, LIBRARY_DIGITS), m.measuredAt.slice(0, 10), m.instrument, m.notes].filter(Boolean).join(' · '),
       ]),
     });
   }
@@ -69,7 +67,7 @@ const caution =
 /** A spec block to paste into a forum post asking for review, as plain text or Markdown. */
 export function designSummary(s: SummaryInput, format: SummaryFormat): string {
   const bs = summaryBlocks(s);
-  const hasTank = typeof pick(s.result, 'tank.capacitance') === 'number';
+  const hasTank = typeof typedResult(s.result)?.tank?.capacitance === 'number';
   const lines: string[] = [];
   if (format === 'markdown') {
     lines.push(`## ${s.name.replace(/([\\`*_#[\]])/g, '\\$1')}`, '', `Revision ${s.revision}, ${s.updatedAt.slice(0, 10)}`, '');

@@ -3,7 +3,7 @@ import { calibratedTuning } from '../buildsheet/calibration';
 import { capacitance, frequency, lengthShort, sig, tapPosition } from '../buildsheet/format';
 import type { Rule, RuleOutcome, TroubleshootContext } from './types';
 
-const INCH = 0.0254;
+import { METRES_PER_INCH as INCH } from '../format/length';
 /** Bare-coil frequency from Wheeler + Medhurst is within about 5 % (R. G. Medhurst, Wireless Engineer 24, 1947, his stated accuracy; builders' reports on the Tesla Coil Mailing List, 1996–1997). */
 export const FREQUENCY_AGREEMENT = 0.05;
 /** Primary tuned a little below the secondary, about 5–10 % (T. Fritz, Tesla Coil Mailing List, May 2006; hvtesla.com tuning notes; common practice). */

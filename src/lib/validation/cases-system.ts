@@ -1,4 +1,5 @@
 import type { ReferenceCase } from './types';
+import { METRES_PER_INCH } from '../../solver/constants';
 import { bankCapacitance, bankVoltageRating } from '../../solver/tank/bank';
 import { capacitorEnergy, powerAtBreakRate } from '../../solver/tank/energy';
 import { sparkLengthFreau } from '../../solver/tank/spark';
@@ -112,7 +113,7 @@ export const systemCases: ReferenceCase[] = [
     reference: 54,
     unit: 'in',
     tolerance: 0.005,
-    compute: () => sparkLengthFreau(1000) / 0.0254,
+    compute: () => sparkLengthFreau(1000) / METRES_PER_INCH,
   },
   {
     id: 'streamer-capacitance-per-foot',

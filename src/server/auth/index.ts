@@ -115,7 +115,7 @@ export { markUserChanged } from './freshness';
 
 /** The cookie cache lifetime in effect, in milliseconds. */
 export function sessionCacheMs(): number {
-  return (Number(process.env.COILWRIGHT_SESSION_CACHE_SECONDS ?? '') || SESSION_CACHE_SECONDS) * 1000;
+  return env().COILWRIGHT_SESSION_CACHE_SECONDS * 1000;
 }
 
 /** Origins a browser request to this site may carry: the public URL, and both loopback spellings when serving on loopback. */
@@ -144,9 +144,9 @@ export function getAuth(): Auth {
       secret: e.BETTER_AUTH_SECRET,
       trustedOrigins: trustedOriginsFor(e.BETTER_AUTH_URL, e.HOST, e.PORT),
       send: sendMail,
-      signInLimit: Number(process.env.COILWRIGHT_AUTH_RATE_LIMIT ?? '') || 10,
-      accountSignInLimit: Number(process.env.COILWRIGHT_ACCOUNT_SIGN_IN_LIMIT ?? '') || 10,
-      sessionCacheSeconds: Number(process.env.COILWRIGHT_SESSION_CACHE_SECONDS ?? '') || SESSION_CACHE_SECONDS,
+      signInLimit: e.COILWRIGHT_AUTH_RATE_LIMIT,
+      accountSignInLimit: e.COILWRIGHT_ACCOUNT_SIGN_IN_LIMIT,
+      sessionCacheSeconds: e.COILWRIGHT_SESSION_CACHE_SECONDS,
     });
   }
   return g.__coilwrightAuth;

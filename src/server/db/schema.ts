@@ -1,5 +1,9 @@
 import { sqliteTable, text, integer, real, index, uniqueIndex, primaryKey } from 'drizzle-orm/sqlite-core';
 import { sql } from 'drizzle-orm';
+import type { DesignInput } from '../../lib/design/schema';
+import type { MeasurementKind, ResultSummary, StoredCalibration, UnitSystem } from '../../lib/api/contracts';
+import { MEMBER_ROLES } from '../../lib/api/contracts/members';
+import { ATTACHMENT_KINDS } from '../../lib/api/contracts/attachments';
 
 const now = sql`(cast(unixepoch('subsecond') * 1000 as integer))`;
 const createdAt = () => integer('created_at', { mode: 'timestamp_ms' }).default(now).notNull();
@@ -22,7 +26,7 @@ export const user = sqliteTable('user', {
   banned: integer('banned', { mode: 'boolean' }).default(false),
   banReason: text('ban_reason'),
   banExpires: integer('ban_expires', { mode: 'timestamp_ms' }),
-  unitSystem: text('unit_system').default('metric').notNull(),
+  unitSystem: text('unit_system').$type<UnitSystem>().default('metric').notNull(),
 });
 
 export const session = sqliteTable(
@@ -87,10 +91,11 @@ export const designs = sqliteTable(
       .notNull()
       .references(() => user.id, { onDelete: 'cascade' }),
     name: text('name').notNull(),
-    design: text('design', { mode: 'json' }).notNull(),
+    // The input exactly as given; a design saved before a schema change may no longer validate.
+    design: text('design', { mode: 'json' }).$type<DesignInput>().notNull(),
     revision: integer('revision').notNull().default(1),
-    // Measured values a builder adopted in place of predictions (JSON: { loadedFrequency?: number, ... }).
-    calibration: text('calibration', { mode: 'json' }),
+    // Measured values a builder adopted in place of predictions.
+    calibration: text('calibration', { mode: 'json' }).$type<StoredCalibration>(),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
@@ -106,8 +111,8 @@ export const designRevisions = sqliteTable(
       .references(() => designs.id, { onDelete: 'cascade' }),
     revision: integer('revision').notNull(),
     name: text('name').notNull(),
-    design: text('design', { mode: 'json' }).notNull(),
-    resultSummary: text('result_summary', { mode: 'json' }),
+    design: text('design', { mode: 'json' }).$type<DesignInput>().notNull(),
+    resultSummary: text('result_summary', { mode: 'json' }).$type<ResultSummary>(),
     authorId: text('author_id').references(() => user.id, { onDelete: 'set null' }),
     message: text('message'),
     createdAt: createdAt(),
@@ -124,7 +129,7 @@ export const designMembers = sqliteTable(
     userId: text('user_id')
       .notNull()
       .references(() => user.id, { onDelete: 'cascade' }),
-    role: text('role', { enum: ['editor', 'viewer'] }).notNull(),
+    role: text('role', { enum: MEMBER_ROLES }).notNull(),
     createdAt: createdAt(),
   },
   (t) => [primaryKey({ columns: [t.designId, t.userId] })],
@@ -138,7 +143,7 @@ export const designInvitations = sqliteTable(
       .notNull()
       .references(() => designs.id, { onDelete: 'cascade' }),
     email: text('email').notNull(),
-    role: text('role', { enum: ['editor', 'viewer'] }).notNull(),
+    role: text('role', { enum: MEMBER_ROLES }).notNull(),
     tokenHash: text('token_hash').notNull().unique(),
     invitedBy: text('invited_by').references(() => user.id, { onDelete: 'set null' }),
     createdAt: createdAt(),
@@ -169,7 +174,7 @@ export const measurements = sqliteTable(
     designId: text('design_id')
       .notNull()
       .references(() => designs.id, { onDelete: 'cascade' }),
-    kind: text('kind').notNull(),
+    kind: text('kind').$type<MeasurementKind>().notNull(),
     value: real('value').notNull(),
     unit: text('unit').notNull(),
     measuredAt: integer('measured_at', { mode: 'timestamp_ms' }).notNull(),
@@ -191,7 +196,7 @@ export const attachments = sqliteTable(
     fileName: text('file_name').notNull(),
     contentType: text('content_type').notNull(),
     size: integer('size').notNull(),
-    kind: text('kind', { enum: ['photo', 'instrument'] }).notNull(),
+    kind: text('kind', { enum: ATTACHMENT_KINDS }).notNull(),
     storageKey: text('storage_key').notNull(),
     thumbnailKey: text('thumbnail_key'),
     uploadedBy: text('uploaded_by').references(() => user.id, { onDelete: 'set null' }),

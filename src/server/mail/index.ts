@@ -7,8 +7,8 @@ let transport: Transporter | undefined;
 
 /** The fake local SMTP server's port, set by the start script when no SMTP_URL is configured. */
 export function devMailPort(): number | null {
-  const p = Number(process.env.COILWRIGHT_DEV_SMTP_PORT ?? '');
-  return Number.isInteger(p) && p > 0 && !env().SMTP_URL ? p : null;
+  const e = env();
+  return e.COILWRIGHT_DEV_SMTP_PORT && !e.SMTP_URL ? e.COILWRIGHT_DEV_SMTP_PORT : null;
 }
 
 function getTransport(): Transporter {

@@ -1,19 +1,24 @@
 import { desc, eq } from 'drizzle-orm';
 import { randomUUID } from 'node:crypto';
 import sharp from 'sharp';
-import { z } from 'zod';
-import type { Db } from '../db/client';
+import { database } from './database';
 import { attachments } from '../db/schema';
+import {
+  INSTRUMENT_EXTENSIONS,
+  INSTRUMENT_MAX_BYTES,
+  PHOTO_MAX_BYTES,
+  PHOTO_TYPES,
+  type Attachment,
+  type AttachmentListResponse,
+  type SweepSummary,
+  type UploadedAttachment,
+} from '../../lib/api/contracts';
 import type { SessionUser } from '../session';
 import { ApiError } from '../http';
 import { deleteObjects, getObject, putObject } from '../storage';
-import { authorize } from './designs';
+import { authorize } from './access';
 import { findResonances, parseSweepFile, sweepFileKind } from '../../lib/touchstone';
 
-export const PHOTO_MAX_BYTES = 10 * 1024 * 1024;
-export const INSTRUMENT_MAX_BYTES = 2 * 1024 * 1024;
-export const PHOTO_TYPES = ['image/jpeg', 'image/png', 'image/webp'] as const;
-export const INSTRUMENT_EXTENSIONS = ['.s1p', '.s2p', '.csv', '.txt'] as const;
 export const THUMBNAIL_SIZE = 320;
 /** Multipart framing around the file; a body beyond the largest file plus this is refused before it is read. */
 const MULTIPART_OVERHEAD = 64 * 1024;
@@ -34,22 +39,9 @@ export function sniffImage(bytes: Uint8Array): PhotoType | null {
 const fileIssue = (message: string) => [{ path: 'file', message }];
 const mb = (n: number) => `${n / (1024 * 1024)} MB`;
 
-export const attachmentSchema = z.object({
-  id: z.string(),
-  designId: z.string(),
-  fileName: z.string(),
-  contentType: z.string(),
-  size: z.number().int(),
-  kind: z.enum(['photo', 'instrument']),
-  url: z.string(),
-  thumbnailUrl: z.string().nullable(),
-  createdAt: z.string(),
-});
-export type AttachmentView = z.infer<typeof attachmentSchema>;
-
 type Row = typeof attachments.$inferSelect;
 
-function view(r: Row): AttachmentView {
+function view(r: Row): Attachment {
   return {
     id: r.id,
     designId: r.designId,
@@ -96,14 +88,15 @@ async function readUpload(request: Request): Promise<File> {
   return file;
 }
 
-export async function listAttachments(db: Db, u: SessionUser | null, designId: string) {
-  await authorize(db, designId, u, 'read');
-  const rows = await db.select().from(attachments).where(eq(attachments.designId, designId)).orderBy(desc(attachments.createdAt));
+export async function listAttachments(u: SessionUser | null, designId: string): Promise<AttachmentListResponse> {
+  await authorize(designId, u, 'read');
+  const rows = await database().select().from(attachments).where(eq(attachments.designId, designId)).orderBy(desc(attachments.createdAt));
   return { attachments: rows.map(view) };
 }
 
-export async function uploadAttachment(db: Db, u: SessionUser, designId: string, request: Request) {
-  await authorize(db, designId, u, 'write');
+export async function uploadAttachment(u: SessionUser, designId: string, request: Request): Promise<UploadedAttachment> {
+  await authorize(designId, u, 'write');
+  const db = database();
   const file = await readUpload(request);
   const fileName = safeFileName(file.name || 'upload');
   const ext = extensionOf(fileName);
@@ -125,7 +118,7 @@ export async function uploadAttachment(db: Db, u: SessionUser, designId: string,
   const prefix = `designs/${designId}/${id}`;
   let contentType: string;
   let thumbnail: Uint8Array | null = null;
-  let sweep: { ok: true; label: string; points: number; resonances: ReturnType<typeof findResonances>['resonances'] } | { ok: false; message: string } | null = null;
+  let sweep: SweepSummary | null = null;
 
   if (isInstrument) {
     if (bytes.subarray(0, 8192).includes(0)) {
@@ -181,11 +174,11 @@ export async function uploadAttachment(db: Db, u: SessionUser, designId: string,
 }
 
 /** The stored bytes of an attachment or its thumbnail, for callers with a role on its design; everyone else gets 404. */
-export async function readAttachment(db: Db, u: SessionUser | null, id: string, which: 'file' | 'thumbnail') {
-  const row = await db.query.attachments.findFirst({ where: eq(attachments.id, id) });
+export async function readAttachment(u: SessionUser | null, id: string, which: 'file' | 'thumbnail') {
+  const row = await database().query.attachments.findFirst({ where: eq(attachments.id, id) });
   if (!row) throw new ApiError('not_found', 'No such file.');
   try {
-    await authorize(db, row.designId, u, 'read');
+    await authorize(row.designId, u, 'read');
   } catch (e) {
     if (e instanceof ApiError) throw new ApiError('not_found', 'No such file.');
     throw e;
@@ -197,16 +190,18 @@ export async function readAttachment(db: Db, u: SessionUser | null, id: string, 
   return { row, body: obj.body, contentType: which === 'file' ? row.contentType : 'image/webp' };
 }
 
-export async function deleteAttachment(db: Db, u: SessionUser, id: string) {
+export async function deleteAttachment(u: SessionUser, id: string): Promise<void> {
+  const db = database();
   const row = await db.query.attachments.findFirst({ where: eq(attachments.id, id) });
   if (!row) throw new ApiError('not_found', 'No such file.');
-  await authorize(db, row.designId, u, 'write');
+  await authorize(row.designId, u, 'write');
   await deleteObjects([row.storageKey, ...(row.thumbnailKey ? [row.thumbnailKey] : [])]);
   await db.delete(attachments).where(eq(attachments.id, id));
 }
 
 /** Removes every stored file of a design; called by deleteDesign before the design's row goes. */
-export async function deleteAttachmentsOf(db: Db, designId: string): Promise<void> {
+export async function deleteAttachmentsOf(designId: string): Promise<void> {
+  const db = database();
   const rows = await db.select().from(attachments).where(eq(attachments.designId, designId));
   const keys = rows.flatMap((r) => [r.storageKey, ...(r.thumbnailKey ? [r.thumbnailKey] : [])]);
   for (let i = 0; i < keys.length; i += 1000) await deleteObjects(keys.slice(i, i + 1000));

@@ -1,18 +1,13 @@
 import { and, desc, eq, isNull, sql } from 'drizzle-orm';
 import { createHash, randomBytes, randomUUID } from 'node:crypto';
-import { z } from 'zod';
-import type { Db } from '../db/client';
+import type { z } from 'zod';
+import { database } from './database';
 import { designs, designInvitations, designMembers, user } from '../db/schema';
+import type { AcceptInvitationResponse, createInvitationBodySchema, Invitation, InvitationDescription, InvitationListItem } from '../../lib/api/contracts';
 import type { SessionUser } from '../session';
 import { ApiError } from '../http';
 import { actionMail, sendMail } from '../mail';
-import { authorize, parseBody } from './designs';
-import { memberRoleSchema } from './members';
-
-export const createInvitationBody = z.object({
-  email: z.email({ error: 'Enter a valid e-mail address.' }).trim().toLowerCase().max(254, 'Enter a valid e-mail address.'),
-  role: memberRoleSchema,
-});
+import { authorize } from './access';
 
 /** An invitation link stays valid for two weeks; after that the owner sends a new one. */
 export const INVITATION_LIFETIME_MS = 14 * 24 * 3600 * 1000;
@@ -23,10 +18,10 @@ export function hashToken(token: string): string {
 
 const tokenShape = /^[A-Za-z0-9_-]{16,64}$/;
 
-export async function createInvitation(db: Db, u: SessionUser, designId: string, body: unknown, origin: string) {
-  const { row } = await authorize(db, designId, u, 'invite');
+export async function createInvitation(u: SessionUser, designId: string, b: z.output<typeof createInvitationBodySchema>, origin: string): Promise<Invitation> {
+  const db = database();
+  const { row } = await authorize(designId, u, 'invite');
   if (!u.emailVerified) throw new ApiError('email_not_verified');
-  const b = parseBody(createInvitationBody, body);
   const invitee = await db.query.user.findFirst({ where: sql`lower(${user.email}) = ${b.email}` });
   if (invitee) {
     const already = invitee.id === row.ownerId || (await db.query.designMembers.findFirst({ where: and(eq(designMembers.designId, designId), eq(designMembers.userId, invitee.id)) }));
@@ -52,9 +47,9 @@ export async function createInvitation(db: Db, u: SessionUser, designId: string,
   return { id, email: b.email, role: b.role, createdAt: new Date().toISOString() };
 }
 
-export async function listInvitations(db: Db, u: SessionUser, designId: string) {
-  await authorize(db, designId, u, 'invite');
-  const rows = await db
+export async function listInvitations(u: SessionUser, designId: string): Promise<InvitationListItem[]> {
+  await authorize(designId, u, 'invite');
+  const rows = await database()
     .select()
     .from(designInvitations)
     .where(and(eq(designInvitations.designId, designId), isNull(designInvitations.acceptedAt)))
@@ -69,9 +64,9 @@ export async function listInvitations(db: Db, u: SessionUser, designId: string) 
   }));
 }
 
-export async function revokeInvitation(db: Db, u: SessionUser, designId: string, invitationId: string) {
-  await authorize(db, designId, u, 'invite');
-  const res = await db
+export async function revokeInvitation(u: SessionUser, designId: string, invitationId: string): Promise<void> {
+  await authorize(designId, u, 'invite');
+  const res = await database()
     .delete(designInvitations)
     .where(and(eq(designInvitations.designId, designId), eq(designInvitations.id, invitationId), isNull(designInvitations.acceptedAt)))
     .returning({ id: designInvitations.id });
@@ -80,7 +75,8 @@ export async function revokeInvitation(db: Db, u: SessionUser, designId: string,
 
 const gone = () => new ApiError('not_found', 'This invitation does not exist, was withdrawn, was already used or has expired.');
 
-async function openInvitation(db: Db, token: string) {
+async function openInvitation(token: string) {
+  const db = database();
   if (!tokenShape.test(token)) throw gone();
   const inv = await db.query.designInvitations.findFirst({ where: eq(designInvitations.tokenHash, hashToken(token)) });
   if (!inv || inv.acceptedAt || Date.now() - inv.createdAt.getTime() > INVITATION_LIFETIME_MS) throw gone();
@@ -90,9 +86,9 @@ async function openInvitation(db: Db, token: string) {
 }
 
 /** What the accept page shows: the design's name, the role and who invited; the token itself is the proof. */
-export async function describeInvitation(db: Db, token: string) {
-  const { inv, d } = await openInvitation(db, token);
-  const inviter = inv.invitedBy ? await db.query.user.findFirst({ where: eq(user.id, inv.invitedBy) }) : undefined;
+export async function describeInvitation(token: string): Promise<InvitationDescription> {
+  const { inv, d } = await openInvitation(token);
+  const inviter = inv.invitedBy ? await database().query.user.findFirst({ where: eq(user.id, inv.invitedBy) }) : undefined;
   return { designName: d.name, role: inv.role, email: inv.email, invitedBy: inviter?.name ?? null };
 }
 
@@ -100,10 +96,10 @@ export async function describeInvitation(db: Db, token: string) {
  * Adds the signed-in person to the design with the invited role. The link is single-use. A person who already
  * owns the design keeps ownership; an existing member takes the invited role.
  */
-export async function acceptInvitation(db: Db, u: SessionUser, token: string) {
-  const { inv, d } = await openInvitation(db, token);
+export async function acceptInvitation(u: SessionUser, token: string): Promise<AcceptInvitationResponse> {
+  const { inv, d } = await openInvitation(token);
   if (d.ownerId === u.id) throw new ApiError('conflict', 'You own this design already.');
-  const done = await db.transaction(async (tx) => {
+  const done = await database().transaction(async (tx) => {
     const claimed = await tx
       .update(designInvitations)
       .set({ acceptedAt: new Date(), acceptedBy: u.id })

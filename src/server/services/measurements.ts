@@ -1,79 +1,23 @@
 import { and, asc, eq } from 'drizzle-orm';
 import { randomUUID } from 'node:crypto';
-import { z } from 'zod';
-import type { Db } from '../db/client';
+import type { z } from 'zod';
+import { database } from './database';
 import { designs, measurements } from '../db/schema';
+import type { CalibrationResponse, calibrationBodySchema, Measurement, MeasurementListResponse, measurementBodySchema } from '../../lib/api/contracts';
+import type { DesignInput } from '../../lib/design';
 import type { SessionUser } from '../session';
 import { ApiError } from '../http';
-import { authorize, parseBody } from './designs';
+import { authorize } from './access';
 import { solveStored } from './solve';
 import { parseDesign } from '../../lib/design';
-import { MEASUREMENT_KINDS, MEASUREMENT_KIND_IDS, predictionFor, relativeError, type MeasurementKind } from '../../lib/troubleshoot';
-import { calibratedTuning, calibrationSchema, mergeCalibration, readCalibration } from '../../lib/buildsheet';
-
-/** Plausible ranges per kind, so a slip of the unit prefix is caught with a message naming `value`. */
-const RANGES: Record<MeasurementKind, { max: number; hint: string }> = {
-  'secondary-inductance': { max: 10, hint: 'in henries, e.g. 0.012 for 12 mH' },
-  'bare-frequency': { max: 100e6, hint: 'in hertz, e.g. 310000 for 310 kHz' },
-  'loaded-frequency': { max: 100e6, hint: 'in hertz, e.g. 190000 for 190 kHz' },
-  'primary-inductance': { max: 1, hint: 'in henries, e.g. 0.00005 for 50 µH' },
-  coupling: { max: 0.999, hint: 'k as a number between 0 and 1' },
-  'spark-length': { max: 100, hint: 'in metres' },
-  'tap-position': { max: 1000, hint: 'turns from the inner end' },
-};
-
-const measuredAt = z.union([z.iso.date(), z.iso.datetime({ offset: true })], {
-  error: 'Give the date of the measurement as an ISO date, e.g. 2026-03-14.',
-});
-
-export const measurementKindSchema = z.enum(MEASUREMENT_KIND_IDS, {
-  error: `kind must be one of: ${MEASUREMENT_KIND_IDS.join(', ')}.`,
-});
-
-export const measurementBody = z
-  .object({
-    kind: measurementKindSchema,
-    value: z.number({ error: 'Give the measured value as a number in SI units.' }).finite('The value must be a finite number.'),
-    unit: z.string().optional(),
-    measuredAt,
-    instrument: z.string().trim().max(120, 'Keep the instrument under 120 characters.').optional(),
-    notes: z.string().trim().max(2000, 'Keep the notes under 2000 characters.').optional(),
-  })
-  .superRefine((b, ctx) => {
-    const spec = MEASUREMENT_KINDS[b.kind];
-    if (b.unit !== undefined && b.unit !== spec.unit) {
-      ctx.addIssue({ code: 'custom', path: ['unit'], message: `A ${spec.label.toLowerCase()} is recorded in ${spec.unit}; convert the value to SI.` });
-    }
-    const range = RANGES[b.kind];
-    if (!(b.value > 0) || b.value > range.max) {
-      ctx.addIssue({ code: 'custom', path: ['value'], message: `The value must be above 0 and at most ${range.max} (${range.hint}).` });
-    }
-    if (Date.parse(b.measuredAt) > Date.now() + 36 * 3600e3) {
-      ctx.addIssue({ code: 'custom', path: ['measuredAt'], message: 'The measurement date is in the future.' });
-    }
-  });
-
-export const measurementSchema = z.object({
-  id: z.string(),
-  kind: measurementKindSchema,
-  label: z.string(),
-  value: z.number(),
-  unit: z.string(),
-  measuredAt: z.string(),
-  instrument: z.string().nullable(),
-  notes: z.string().nullable(),
-  predicted: z.number().nullable(),
-  /** (measured − predicted) / predicted × 100 */
-  errorPercent: z.number().nullable(),
-  createdAt: z.string(),
-});
-export type MeasurementView = z.infer<typeof measurementSchema>;
+import { MEASUREMENT_KINDS, predictionFor, relativeError, type MeasurementKind } from '../../lib/troubleshoot';
+import { calibratedTuning, mergeCalibration, readCalibration, type Calibration } from '../../lib/buildsheet';
 
 type Row = typeof measurements.$inferSelect;
 
-function view(r: Row, result: ReturnType<typeof solveStored>): MeasurementView {
-  const kind = r.kind as MeasurementKind;
-  const spec = MEASUREMENT_KINDS[kind];
+function view(r: Row, result: ReturnType<typeof solveStored>): Measurement {
+  const kind = r.kind;
+  const spec = MEASUREMENT_KINDS[kind] as (typeof MEASUREMENT_KINDS)[MeasurementKind] | undefined;
   const predicted = spec ? predictionFor(kind, result) : null;
   const err = relativeError(r.value, predicted);
   return {
@@ -91,20 +35,20 @@ function view(r: Row, result: ReturnType<typeof solveStored>): MeasurementView {
   };
 }
 
-export async function measurementRows(db: Db, designId: string): Promise<Row[]> {
-  return db.select().from(measurements).where(eq(measurements.designId, designId)).orderBy(asc(measurements.measuredAt), asc(measurements.createdAt));
+export async function measurementRows(designId: string): Promise<Row[]> {
+  return database().select().from(measurements).where(eq(measurements.designId, designId)).orderBy(asc(measurements.measuredAt), asc(measurements.createdAt));
 }
 
-export async function listMeasurements(db: Db, u: SessionUser | null, designId: string) {
-  const { row } = await authorize(db, designId, u, 'read');
+export async function listMeasurements(u: SessionUser | null, designId: string): Promise<MeasurementListResponse> {
+  const { row } = await authorize(designId, u, 'read');
   const result = solveStored(row.design);
-  return { measurements: (await measurementRows(db, designId)).map((r) => view(r, result)) };
+  return { measurements: (await measurementRows(designId)).map((r) => view(r, result)) };
 }
 
-export async function createMeasurement(db: Db, u: SessionUser, designId: string, body: unknown) {
-  const { row } = await authorize(db, designId, u, 'write');
-  const b = parseBody(measurementBody, body);
+export async function createMeasurement(u: SessionUser, designId: string, b: z.output<typeof measurementBodySchema>): Promise<Measurement> {
+  const { row } = await authorize(designId, u, 'write');
   const id = randomUUID();
+  const db = database();
   await db.insert(measurements).values({
     id,
     designId,
@@ -120,23 +64,17 @@ export async function createMeasurement(db: Db, u: SessionUser, designId: string
   return view(inserted!, solveStored(row.design));
 }
 
-export async function deleteMeasurement(db: Db, u: SessionUser, designId: string, measurementId: string) {
-  await authorize(db, designId, u, 'write');
-  const res = await db
+export async function deleteMeasurement(u: SessionUser, designId: string, measurementId: string): Promise<void> {
+  await authorize(designId, u, 'write');
+  const res = await database()
     .delete(measurements)
     .where(and(eq(measurements.id, measurementId), eq(measurements.designId, designId)))
     .returning({ id: measurements.id });
   if (res.length === 0) throw new ApiError('not_found', 'No such measurement.');
 }
 
-export const calibrationResponseSchema = z.object({
-  calibration: z.object({ loadedFrequency: z.number().optional(), tankCapacitance: z.number().optional(), coupling: z.number().optional() }),
-  predicted: z.object({ loadedFrequency: z.number().nullable(), tapTurns: z.number().nullable() }),
-  calibrated: z.object({ targetFrequency: z.number(), tapTurns: z.number().nullable(), inRange: z.boolean() }).nullable(),
-});
-
-function calibrationView(design: unknown, raw: unknown) {
-  const calibration = readCalibration(raw);
+function calibrationView(design: DesignInput, stored: Calibration | null): CalibrationResponse {
+  const calibration = readCalibration(stored);
   const parsed = parseDesign(design);
   const result = parsed.ok ? solveStored(design) : null;
   const cal = parsed.ok && result ? calibratedTuning(parsed.design, result, calibration) : null;
@@ -147,15 +85,14 @@ function calibrationView(design: unknown, raw: unknown) {
   };
 }
 
-export async function getCalibration(db: Db, u: SessionUser | null, designId: string) {
-  const { row } = await authorize(db, designId, u, 'read');
+export async function getCalibration(u: SessionUser | null, designId: string): Promise<CalibrationResponse> {
+  const { row } = await authorize(designId, u, 'read');
   return calibrationView(row.design, row.calibration);
 }
 
-export async function putCalibration(db: Db, u: SessionUser, designId: string, body: unknown) {
-  const { row } = await authorize(db, designId, u, 'write');
-  const update = parseBody(calibrationSchema, body);
+export async function putCalibration(u: SessionUser, designId: string, update: z.output<typeof calibrationBodySchema>): Promise<CalibrationResponse> {
+  const { row } = await authorize(designId, u, 'write');
   const next = mergeCalibration(readCalibration(row.calibration), update);
-  await db.update(designs).set({ calibration: next }).where(eq(designs.id, designId));
+  await database().update(designs).set({ calibration: next }).where(eq(designs.id, designId));
   return calibrationView(row.design, next);
 }

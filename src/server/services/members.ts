@@ -1,23 +1,16 @@
 import { and, asc, eq } from 'drizzle-orm';
-import { z } from 'zod';
-import type { Db } from '../db/client';
+import { database } from './database';
 import { designs, designMembers, user } from '../db/schema';
 import { designCan } from '../../lib/permissions';
+import type { Person, TransferBody, TransferResponse, UpdateMemberBody, UpdateMemberResponse } from '../../lib/api/contracts';
 import type { SessionUser } from '../session';
 import { ApiError } from '../http';
-import { authorize, parseBody } from './designs';
-
-export const memberRoleSchema = z.enum(['editor', 'viewer'], { error: 'Choose editor or viewer.' });
-export const updateMemberBody = z.object({ role: memberRoleSchema });
-export const transferBody = z.object({ userId: z.string({ error: 'Name the member who becomes the owner.' }).min(1, 'Name the member who becomes the owner.') });
-
-export type MemberRole = z.infer<typeof memberRoleSchema>;
-
-export type Person = { userId: string; name: string; email: string | null; role: 'owner' | MemberRole; since: string };
+import { authorize } from './access';
 
 /** The owner first, then members by when they joined. Addresses only for those who manage the people. */
-export async function listMembers(db: Db, u: SessionUser, designId: string): Promise<Person[]> {
-  const { row, role } = await authorize(db, designId, u, 'read');
+export async function listMembers(u: SessionUser, designId: string): Promise<Person[]> {
+  const db = database();
+  const { row, role } = await authorize(designId, u, 'read');
   const showEmail = designCan(role, 'manage-members') || role === 'admin';
   const owner = await db.query.user.findFirst({ where: eq(user.id, row.ownerId) });
   const rows = await db
@@ -44,15 +37,14 @@ export async function listMembers(db: Db, u: SessionUser, designId: string): Pro
   ];
 }
 
-async function memberRow(db: Db, designId: string, userId: string) {
-  return db.query.designMembers.findFirst({ where: and(eq(designMembers.designId, designId), eq(designMembers.userId, userId)) });
+async function memberRow(designId: string, userId: string) {
+  return database().query.designMembers.findFirst({ where: and(eq(designMembers.designId, designId), eq(designMembers.userId, userId)) });
 }
 
-export async function updateMember(db: Db, u: SessionUser, designId: string, userId: string, body: unknown) {
-  const b = parseBody(updateMemberBody, body);
-  const { row } = await authorize(db, designId, u, 'manage-members');
+export async function updateMember(u: SessionUser, designId: string, userId: string, b: UpdateMemberBody): Promise<UpdateMemberResponse> {
+  const { row } = await authorize(designId, u, 'manage-members');
   if (userId === row.ownerId) throw new ApiError('validation_failed', 'The owner has no member role; transfer ownership instead.', [{ path: 'userId', message: 'This is the owner.' }]);
-  const res = await db
+  const res = await database()
     .update(designMembers)
     .set({ role: b.role })
     .where(and(eq(designMembers.designId, designId), eq(designMembers.userId, userId)))
@@ -62,11 +54,11 @@ export async function updateMember(db: Db, u: SessionUser, designId: string, use
 }
 
 /** The owner removes anyone; a member may also remove themselves (leave the design). */
-export async function removeMember(db: Db, u: SessionUser, designId: string, userId: string) {
+export async function removeMember(u: SessionUser, designId: string, userId: string): Promise<void> {
   const leaving = userId === u.id;
-  const { row } = await authorize(db, designId, u, leaving ? 'read' : 'manage-members');
+  const { row } = await authorize(designId, u, leaving ? 'read' : 'manage-members');
   if (userId === row.ownerId) throw new ApiError('validation_failed', 'The owner cannot be removed; transfer ownership first.', [{ path: 'userId', message: 'This is the owner.' }]);
-  const res = await db
+  const res = await database()
     .delete(designMembers)
     .where(and(eq(designMembers.designId, designId), eq(designMembers.userId, userId)))
     .returning({ userId: designMembers.userId });
@@ -74,16 +66,15 @@ export async function removeMember(db: Db, u: SessionUser, designId: string, use
 }
 
 /** Hands the design to an existing member; the old owner stays on as an editor. */
-export async function transferOwnership(db: Db, u: SessionUser, designId: string, body: unknown) {
-  const b = parseBody(transferBody, body);
-  const { row } = await authorize(db, designId, u, 'transfer');
+export async function transferOwnership(u: SessionUser, designId: string, b: TransferBody): Promise<TransferResponse> {
+  const { row } = await authorize(designId, u, 'transfer');
   if (b.userId === row.ownerId) throw new ApiError('validation_failed', 'You already own this design.', [{ path: 'userId', message: 'This is already the owner.' }]);
-  const target = await memberRow(db, designId, b.userId);
+  const target = await memberRow(designId, b.userId);
   if (!target) throw new ApiError('validation_failed', 'Only a member of the design can become its owner; invite them first.', [{ path: 'userId', message: 'Not a member of this design.' }]);
-  await db.transaction(async (tx) => {
+  await database().transaction(async (tx) => {
     await tx.delete(designMembers).where(and(eq(designMembers.designId, designId), eq(designMembers.userId, b.userId)));
     await tx.update(designs).set({ ownerId: b.userId }).where(eq(designs.id, designId));
     await tx.insert(designMembers).values({ designId, userId: row.ownerId, role: 'editor' });
   });
-  return { ownerId: b.userId, previousOwner: { userId: row.ownerId, role: 'editor' as const } };
+  return { ownerId: b.userId, previousOwner: { userId: row.ownerId, role: 'editor' } };
 }

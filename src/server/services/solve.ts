@@ -1,25 +1,43 @@
 import { parseDesign } from '../../lib/design';
+import type { ApiIssue, DesignInput, Result, ResultSummary } from '../../lib/api/contracts';
 import { solve } from '../../solver';
 import { ApiError } from '../http';
 
-/** Validates a design input and solves it; bad input becomes the contract's validation error. */
-export function validateDesign(input: unknown) {
+/** Validates a design input; bad input becomes the contract's validation error, each issue under `prefix`. */
+export function validateDesign(input: unknown, prefix = '') {
   const parsed = parseDesign(input);
-  if (!parsed.ok) throw new ApiError('validation_failed', 'The design has invalid fields.', prefixIssues(parsed.issues, ''));
+  if (!parsed.ok) throw new ApiError('validation_failed', 'The design has invalid fields.', prefixIssues(parsed.issues, prefix));
   return parsed;
 }
 
-export function solveInput(input: unknown) {
+/** The `design` member of a request body: required, and checked with every issue named under "design.". */
+export function requireDesignField(design: unknown) {
+  if (design === undefined) throw new ApiError('validation_failed', 'Some fields need attention.', [{ path: 'design', message: 'The design is missing.' }]);
+  return validateDesign(design, 'design');
+}
+
+export function solveInput(input: unknown): { input: DesignInput; result: Result } {
   const parsed = validateDesign(input);
   return { input: parsed.input, result: solve(parsed.design) };
 }
 
 /** Solves a stored design; a design saved before a schema change still answers, with its result null. */
-export function solveStored(input: unknown) {
+export function solveStored(input: unknown): Result | null {
   const parsed = parseDesign(input);
   return parsed.ok ? solve(parsed.design) : null;
 }
 
-export function prefixIssues(issues: Array<{ path: string; message: string }>, prefix: string) {
+/** The key figures stored with each revision. */
+export function resultSummary(result: Result | null): ResultSummary | null {
+  if (!result) return null;
+  return {
+    loadedFrequency: result.system?.resonantFrequency ?? null,
+    tapTurns: result.tuning?.tapTurns ?? null,
+    k: result.coupling?.k ?? null,
+    inductance: result.secondary?.inductance ?? null,
+  };
+}
+
+export function prefixIssues(issues: ApiIssue[], prefix: string): ApiIssue[] {
   return issues.map((i) => ({ path: prefix ? (i.path ? `${prefix}.${i.path}` : prefix) : i.path, message: i.message }));
 }

@@ -1,39 +1,40 @@
 import { desc, eq } from 'drizzle-orm';
-import { z } from 'zod';
-import type { Db } from '../db/client';
+import { database } from './database';
 import { measurements } from '../db/schema';
+import { summaryQuerySchema, type StoredCalibration } from '../../lib/api/contracts';
 import type { SessionUser } from '../session';
-import { ApiError } from '../http';
+import { parseQuery } from '../http';
 import { designSummary, type Measured, type SummaryFormat } from '../../lib/library/summary';
-import { authorize, getShared } from './designs';
+import { authorize } from './access';
+import { sharedRow } from './shares';
 import { solveStored } from './solve';
 
-export const summaryQuery = z.object({ format: z.enum(['text', 'markdown'], { error: 'Choose text or markdown.' }).default('text') });
-
+/** The summary's format from a URL's query (text unless markdown is asked for); anything else is a 400 naming `format`. */
 export function parseSummaryFormat(url: URL): SummaryFormat {
-  const r = summaryQuery.safeParse({ format: url.searchParams.get('format') ?? undefined });
-  if (!r.success) throw new ApiError('validation_failed', 'Choose format=text or format=markdown.', [{ path: 'format', message: 'Choose text or markdown.' }]);
-  return r.data.format;
+  return parseQuery(url, summaryQuerySchema, 'Choose format=text or format=markdown.').format;
 }
 
-function calibrationRows(calibration: unknown): Measured[] {
-  if (!calibration || typeof calibration !== 'object') return [];
-  const units: Record<string, string> = { loadedFrequency: 'Hz', k: '', tapTurns: 'turns' };
-  return Object.entries(calibration as Record<string, unknown>)
-    .filter((e): e is [string, number] => typeof e[1] === 'number' && Number.isFinite(e[1]))
-    .map(([kind, value]) => ({ kind: `${kind} (adopted)`, value, unit: units[kind] ?? '', measuredAt: '', instrument: null, notes: null }));
+function calibrationRows(calibration: StoredCalibration | null): Measured[] {
+  if (!calibration) return [];
+  const units: Record<keyof StoredCalibration, string> = { loadedFrequency: 'Hz', tankCapacitance: 'F', coupling: '' };
+  return (Object.keys(units) as Array<keyof StoredCalibration>)
+    .flatMap((kind) => {
+      const value = calibration[kind];
+      return typeof value === 'number' && Number.isFinite(value) ? [{ kind, value }] : [];
+    })
+    .map(({ kind, value }) => ({ kind: `${kind} (adopted)`, value, unit: units[kind], measuredAt: '', instrument: null, notes: null }));
 }
 
-async function measuredOf(db: Db, designId: string, calibration: unknown): Promise<Measured[]> {
-  const rows = await db.select().from(measurements).where(eq(measurements.designId, designId)).orderBy(desc(measurements.measuredAt));
+async function measuredOf(designId: string, calibration: StoredCalibration | null): Promise<Measured[]> {
+  const rows = await database().select().from(measurements).where(eq(measurements.designId, designId)).orderBy(desc(measurements.measuredAt));
   return [
     ...rows.map((m) => ({ kind: m.kind, value: m.value, unit: m.unit, measuredAt: m.measuredAt.toISOString(), instrument: m.instrument, notes: m.notes })),
     ...calibrationRows(calibration),
   ];
 }
 
-export async function summaryForDesign(db: Db, u: SessionUser, designId: string, format: SummaryFormat) {
-  const { row } = await authorize(db, designId, u, 'read');
+export async function summaryForDesign(u: SessionUser, designId: string, format: SummaryFormat): Promise<string> {
+  const { row } = await authorize(designId, u, 'read');
   return designSummary(
     {
       name: row.name,
@@ -41,25 +42,22 @@ export async function summaryForDesign(db: Db, u: SessionUser, designId: string,
       updatedAt: row.updatedAt.toISOString(),
       design: row.design,
       result: solveStored(row.design),
-      measured: await measuredOf(db, row.id, row.calibration),
+      measured: await measuredOf(row.id, row.calibration),
     },
     format,
   );
 }
 
-export async function summaryForShared(db: Db, token: string, format: SummaryFormat, origin: string) {
-  const shared = await getShared(db, token);
-  const share = await db.query.designShares.findFirst({ where: (t, { eq: e }) => e(t.token, token) });
-  const row = share ? await db.query.designs.findFirst({ where: (t, { eq: e }) => e(t.id, share.designId) }) : undefined;
-  if (!row) throw new ApiError('not_found', 'This link does not exist or was revoked.');
+export async function summaryForShared(token: string, format: SummaryFormat, origin: string): Promise<string> {
+  const row = await sharedRow(token);
   return designSummary(
     {
-      name: shared.name,
-      revision: shared.revision,
-      updatedAt: shared.updatedAt,
-      design: shared.design,
-      result: shared.result,
-      measured: await measuredOf(db, row.id, row.calibration),
+      name: row.name,
+      revision: row.revision,
+      updatedAt: row.updatedAt.toISOString(),
+      design: row.design,
+      result: solveStored(row.design),
+      measured: await measuredOf(row.id, row.calibration),
       url: `${origin}/s/${token}`,
     },
     format,

@@ -1,56 +1,21 @@
-import { z } from 'zod';
-import type { Db } from '../db/client';
 import type { SessionUser } from '../session';
-import { ApiError } from '../http';
-import { authorize } from './designs';
+import { ApiError, parseQuery } from '../http';
+import { authorize } from './access';
 import { measurementRows } from './measurements';
 import { prefixIssues } from './solve';
 import { parseDesign } from '../../lib/design';
 import { solve } from '../../solver';
 import { readCalibration } from '../../lib/buildsheet';
+import { troubleshootQuerySchema, type TroubleshootQuery, type TroubleshootResponse } from '../../lib/api/contracts';
 import { QUESTIONS, SYMPTOMS, SYMPTOM_LABELS, benchValues, diagnose, type Answers, type QuestionId, type Symptom } from '../../lib/troubleshoot';
 
-const answer = z.enum(['yes', 'no', ''], { error: 'Answer yes, no, or leave it empty.' }).optional();
-
-export const troubleshootQuerySchema = z.object({
-  symptom: z.enum(SYMPTOMS, { error: `symptom must be one of: ${SYMPTOMS.join(', ')}.` }).optional(),
-  rfGround: answer,
-  strikeRail: answer,
-  breakoutPoint: answer,
-  groundFaultProtection: answer,
-});
-export type TroubleshootQuery = z.output<typeof troubleshootQuerySchema>;
-
 export function parseTroubleshootQuery(url: URL): TroubleshootQuery {
-  const raw: Record<string, string> = {};
-  for (const key of ['symptom', ...Object.keys(QUESTIONS)]) {
-    const v = url.searchParams.get(key);
-    if (v !== null && v !== '') raw[key] = v;
-  }
-  const r = troubleshootQuerySchema.safeParse(raw);
-  if (!r.success) throw new ApiError('validation_failed', 'Some parameters need attention.', r.error.issues.map((i) => ({ path: i.path.join('.'), message: i.message })));
-  return r.data;
+  return parseQuery(url, troubleshootQuerySchema);
 }
 
-export const diagnosisSchema = z.object({
-  ruleId: z.string(),
-  cause: z.string(),
-  threshold: z.string(),
-  source: z.string(),
-  nextCheck: z.string(),
-  question: z.string().nullable(),
-  status: z.enum(['triggered', 'clear', 'unknown', 'not-applicable']),
-  finding: z.string(),
-});
-
-export const troubleshootResponseSchema = z.object({
-  questions: z.array(z.object({ id: z.string(), text: z.string(), answer: z.boolean().nullable() })),
-  symptoms: z.array(z.object({ symptom: z.enum(SYMPTOMS), label: z.string(), causes: z.array(diagnosisSchema) })),
-});
-
 /** The guided check for one symptom (or all four), against the design, its bench log and the answers given. */
-export async function troubleshootDesign(db: Db, u: SessionUser | null, designId: string, q: TroubleshootQuery) {
-  const { row } = await authorize(db, designId, u, 'read');
+export async function troubleshootDesign(u: SessionUser | null, designId: string, q: TroubleshootQuery): Promise<TroubleshootResponse> {
+  const { row } = await authorize(designId, u, 'read');
   const parsed = parseDesign(row.design);
   if (!parsed.ok) throw new ApiError('validation_failed', 'The saved design has invalid fields; fix it in the designer first.', prefixIssues(parsed.issues, 'design'));
   const answers: Answers = {};
@@ -59,7 +24,7 @@ export async function troubleshootDesign(db: Db, u: SessionUser | null, designId
     if (a === 'yes') answers[id] = true;
     else if (a === 'no') answers[id] = false;
   }
-  const rows = await measurementRows(db, designId);
+  const rows = await measurementRows(designId);
   const ctx = {
     design: parsed.design,
     result: solve(parsed.design),

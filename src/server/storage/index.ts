@@ -5,7 +5,7 @@ let client: S3Client | undefined;
 
 function endpoint(): string {
   const e = env();
-  const ep = e.S3_ENDPOINT || process.env.COILWRIGHT_DEV_S3_ENDPOINT;
+  const ep = e.S3_ENDPOINT || e.COILWRIGHT_DEV_S3_ENDPOINT;
   if (!ep) throw new Error('No S3 endpoint: set S3_ENDPOINT, or start the app with npm start');
   return ep;
 }

@@ -1,4 +1,4 @@
-import { MU_0 } from '../constants';
+import { METRES_PER_INCH, MU_0 } from '../constants';
 import { ellipMaxwellCombination } from '../math/ellip';
 import { inductanceSolenoidWheeler1928 } from '../secondary/inductance';
 import { type PrimaryGeometry, primaryRingsAtTap, validatePrimary } from './geometry';
@@ -89,7 +89,7 @@ export function inductanceFlatSpiralWheeler(meanRadius: number, turns: number, r
   if (!(meanRadius > 0) || !(turns > 0) || !(radialWidth > 0)) {
     throw new RangeError('mean radius, turns and radial width must be positive');
   }
-  return ((1e-6 / 0.0254) * meanRadius * meanRadius * turns * turns) / (8 * meanRadius + 11 * radialWidth);
+  return ((1e-6 / METRES_PER_INCH) * meanRadius * meanRadius * turns * turns) / (8 * meanRadius + 11 * radialWidth);
 }
 
 /**

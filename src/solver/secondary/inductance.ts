@@ -1,4 +1,4 @@
-import { MU_0 } from '../constants';
+import { METRES_PER_INCH, MU_0 } from '../constants';
 import { ellipKEComplementary, ellipKMinusE } from '../math/ellip';
 
 /**
@@ -134,7 +134,7 @@ export function inductanceSolenoidRoundWire(turns: number, radius: number, lengt
  */
 export function inductanceSolenoidWheeler1928(turns: number, radius: number, length: number): number {
   checkCoil(turns, radius, length);
-  return ((1e-6 / 0.0254) * radius * radius * turns * turns) / (9 * radius + 10 * length);
+  return ((1e-6 / METRES_PER_INCH) * radius * radius * turns * turns) / (9 * radius + 10 * length);
 }
 
 /**

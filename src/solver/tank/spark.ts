@@ -1,4 +1,4 @@
-const METRES_PER_INCH = 0.0254;
+import { METRES_PER_INCH } from '../constants';
 
 /**
  * Freau's rule of thumb for the spark length of a spark-gap coil: L[in] ≈ 1.7 · √(input watts).

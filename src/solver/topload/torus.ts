@@ -1,4 +1,4 @@
-import { EPSILON_0 } from '../constants';
+import { EPSILON_0, METRES_PER_INCH } from '../constants';
 
 /**
  * Capacitance of an isolated conducting ring torus, in F: the exact toroidal-harmonic series.
@@ -95,5 +95,5 @@ export function capacitanceToroidEmpirical(majorOuterDiameter: number, minorDiam
   if (!(d > 0) || !(D > 2 * d) || !Number.isFinite(D)) {
     throw new RangeError('toroid needs outside diameter greater than twice the tube diameter');
   }
-  return (2.8e-12 / 0.0254) * (1.2781 - d / D) * Math.sqrt((Math.PI * (D - d) * d) / 4);
+  return (2.8e-12 / METRES_PER_INCH) * (1.2781 - d / D) * Math.sqrt((Math.PI * (D - d) * d) / 4);
 }

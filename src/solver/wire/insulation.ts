@@ -1,3 +1,4 @@
+import { METRES_PER_INCH } from '../constants';
 import { awgDiameter, awgFromDiameter } from './awg';
 
 /** The kind of enamel film: none, single (grade 1) or heavy (grade 2) build. */
@@ -57,7 +58,7 @@ export function insulatedDiameter(bare: number, build: InsulationBuild): number 
     const f = (gauge - t[i].awg) / (t[i + 1].awg - t[i].awg);
     increment = t[i][build] + f * (t[i + 1][build] - t[i][build]);
   }
-  return bare + increment * 0.0254;
+  return bare + increment * METRES_PER_INCH;
 }
 
 /** Convenience: overall diameter of an AWG size with the given build. @example insulatedDiameterAwg(24, 'bare') // 5.1054e-4 */

@@ -1,18 +1,13 @@
 import { useFormContext, useWatch } from 'react-hook-form';
 import { AWG_MAX, AWG_MIN, awgDiameter, insulatedDiameterAwg, INSULATION_SOURCE } from '~/solver';
 import { formatLength, type UnitSystem } from '~/lib/format';
+import { designField } from '~/lib/design/registry';
 import type { FormValues } from './values';
 import { fieldId, useFieldFeedback } from './field-context';
 import { SelectField } from './SelectField';
 import { FieldWarnings } from './FieldWarnings';
 
 const GAUGES = Array.from({ length: 41 - 10 + 1 }, (_, i) => 10 + i);
-const INSULATION = [
-  { value: 'heavy', label: 'Heavy build (double enamel)' },
-  { value: 'single', label: 'Single build' },
-  { value: 'bare', label: 'Bare copper' },
-] as const;
-
 function gaugeLabel(n: number): string {
   return n <= 0 ? `${'0'.repeat(1 - n)}` : String(n);
 }
@@ -34,7 +29,7 @@ export function AwgPicker({ system }: { system: UnitSystem }) {
     <div className="grid gap-3 sm:grid-cols-2">
       <div>
         <label htmlFor={id} className="cw-label text-sm">
-          Wire gauge (AWG)
+          {designField('secondary.wire.awg').label}
         </label>
         <select id={id} className="cw-input" disabled={readOnly} aria-describedby={`${id}-readout`} aria-invalid={error ? true : undefined} {...register('secondary.wire.awg')}>
           {!inList && awgText !== '' && <option value={awgText}>AWG {awgText}</option>}
@@ -47,7 +42,7 @@ export function AwgPicker({ system }: { system: UnitSystem }) {
         {error && <p className="cw-field-error">{error}</p>}
         <FieldWarnings path="secondary.wire.awg" />
       </div>
-      <SelectField path="secondary.wire.insulation" label="Enamel" options={INSULATION} />
+      <SelectField path="secondary.wire.insulation" />
       <p id={`${id}-readout`} className="cw-hint sm:col-span-2" data-testid="awg-readout">
         {bare !== null && insulated !== null ? (
           <>

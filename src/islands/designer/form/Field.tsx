@@ -1,20 +1,36 @@
 import type { ReactNode } from 'react';
 import { useFormContext, type FieldPath } from 'react-hook-form';
+import { findDesignField, type FieldSpec } from '~/lib/design/registry';
+import type { UnitSystem } from '~/lib/format';
 import type { FormValues } from './values';
 import { fieldId, useFieldFeedback } from './field-context';
 import { FieldWarnings } from './FieldWarnings';
 
 type Props = {
   path: FieldPath<FormValues>;
-  label: string;
+  /** defaults to the design registry's label and hint for the path */
+  label?: string;
   hint?: ReactNode;
+  system?: UnitSystem;
   placeholder?: string;
   inputMode?: 'text' | 'decimal' | 'numeric';
   className?: string;
 };
 
+/** The form's hint for a registry field: its own, or for a length an example in the user's system. */
+export function registryHint(f: FieldSpec | undefined, system: UnitSystem = 'metric'): string | undefined {
+  if (!f) return undefined;
+  if (f.hint) return f.hint;
+  if (f.example) return `A length with its unit, e.g. ${f.example[system]}`;
+  return undefined;
+}
+
 /** A labelled text input bound to the form, with its error and the solver's warnings about it underneath. */
-export function Field({ path, label, hint, placeholder, inputMode = 'text', className }: Props) {
+export function Field({ path, label: givenLabel, hint: givenHint, system, placeholder, inputMode, className }: Props) {
+  const spec = findDesignField(path);
+  const label = givenLabel ?? spec?.label ?? path;
+  const hint = givenHint ?? registryHint(spec, system);
+  const mode = inputMode ?? (spec?.kind === 'count' ? (spec.integer ? 'numeric' : 'decimal') : spec?.kind === 'ratio' ? 'decimal' : 'text');
   const { register } = useFormContext<FormValues>();
   const { errorFor, readOnly } = useFieldFeedback();
   const id = fieldId(path);
@@ -32,7 +48,7 @@ export function Field({ path, label, hint, placeholder, inputMode = 'text', clas
         className="cw-input"
         autoComplete="off"
         spellCheck={false}
-        inputMode={inputMode}
+        inputMode={mode}
         placeholder={placeholder}
         readOnly={readOnly}
         aria-invalid={error ? true : undefined}

@@ -1,15 +1,22 @@
 import { useFormContext, type FieldPath } from 'react-hook-form';
+import { findDesignField } from '~/lib/design/registry';
 import type { FormValues } from './values';
 import { fieldId, useFieldFeedback } from './field-context';
 
 type Props = {
   path: FieldPath<FormValues>;
-  label: string;
-  options: ReadonlyArray<{ value: string; label: string }>;
+  /** label and options default to the design registry's for the path */
+  label?: string;
+  options?: ReadonlyArray<{ value: string; label: string }>;
+  /** the wording of a first "none" choice, for a part that may be absent */
+  none?: string;
   className?: string;
 };
 
-export function SelectField({ path, label, options, className }: Props) {
+export function SelectField({ path, label: givenLabel, options: givenOptions, none, className }: Props) {
+  const spec = findDesignField(path);
+  const label = givenLabel ?? spec?.label ?? path;
+  const options = [...(none ? [{ value: 'none', label: none }] : []), ...(givenOptions ?? spec?.options ?? [])];
   const { register } = useFormContext<FormValues>();
   const { errorFor, readOnly } = useFieldFeedback();
   const id = fieldId(path);

@@ -1,95 +1,62 @@
 import type { DesignInput } from '~/lib/design';
+import { DESIGN_FIELDS, defaultText, pathsOfKind } from '~/lib/design/registry';
 import { lengthInputText, convertLengthText, type UnitSystem } from '~/lib/format';
 
-/**
- * What the designer's form holds: every field as the text in its input, every optional part with a
- * switch, so that turning a part off and on again keeps what was typed. Field paths mirror the
- * design's, so the schema's issues land on the right input.
- */
-export interface FormValues {
+type Fields = (typeof DESIGN_FIELDS)[number];
+type UnionToIntersection<U> = (U extends unknown ? (x: U) => void : never) extends (x: infer I) => void ? I : never;
+type Simplify<T> = T extends object ? { [K in keyof T]: Simplify<T[K]> } : T;
+type Leaf<P extends string, V> = P extends `${infer H}.${infer T}` ? { [K in H]: Leaf<T, V> } : { [K in P]: V };
+/** Parts that may be absent get a "none" choice in the form. */
+type NoneChoice = 'topload.shape' | 'supply.kind';
+type FieldValue<F> = F extends { path: infer P; kind: 'choice'; options: ReadonlyArray<{ value: infer V }> }
+  ? V | (P extends NoneChoice ? 'none' : never)
+  : string;
+type RegistryValues = UnionToIntersection<Fields extends infer F ? (F extends { path: infer P extends string } ? Leaf<P, FieldValue<F>> : never) : never>;
+
+/** The form's own switches, which are not fields of the design: they pick a variant or turn a part on. */
+interface FormSwitches {
   name: string;
-  secondary: {
-    formDiameter: string;
-    turns: string;
-    wireMode: 'awg' | 'diameter';
-    wire: { awg: string; insulation: 'bare' | 'single' | 'heavy'; diameter: string; insulatedDiameter: string };
-    windingLength: string;
-    elevation: string;
-  };
-  groundClearance: string;
-  topload: { shape: 'none' | 'toroid' | 'sphere'; majorDiameter: string; minorDiameter: string; diameter: string; elevation: string };
-  primary: {
-    enabled: boolean;
-    shape: 'flat' | 'helical' | 'conical';
-    innerDiameter: string;
-    turns: string;
-    conductorDiameter: string;
-    spacing: string;
-    angle: string;
-    elevation: string;
-  };
-  tank: { mode: 'none' | 'single' | 'bank'; capacitance: string; unitCapacitance: string; unitVoltage: string; series: string; parallel: string };
-  supply: {
-    kind: 'none' | 'transformer' | 'solid-state';
-    voltage: string;
-    current: string;
-    lineFrequency: string;
-    breakRate: string;
-    busVoltage: string;
-  };
-  tuning: { streamerMode: 'capacitance' | 'length'; streamerCapacitance: string; streamerLength: string; targetCoupling: string };
+  secondary: { wireMode: 'awg' | 'diameter' };
+  primary: { enabled: boolean };
+  tank: { mode: 'none' | 'single' | 'bank' };
+  tuning: { streamerMode: 'capacitance' | 'length' };
 }
 
+/**
+ * What the designer's form holds: every field of the design registry as the text in its input (a choice
+ * as its value), plus the switches, so that turning a part off and on again keeps what was typed. Field
+ * paths mirror the design's, so the schema's issues land on the right input.
+ */
+export type FormValues = Simplify<RegistryValues & FormSwitches>;
+
 /** Paths of the fields that hold lengths: these follow the unit switch. */
-export const LENGTH_PATHS = [
-  'secondary.formDiameter',
-  'secondary.wire.diameter',
-  'secondary.wire.insulatedDiameter',
-  'secondary.windingLength',
-  'secondary.elevation',
-  'groundClearance',
-  'topload.majorDiameter',
-  'topload.minorDiameter',
-  'topload.diameter',
-  'topload.elevation',
-  'primary.innerDiameter',
-  'primary.conductorDiameter',
-  'primary.spacing',
-  'primary.elevation',
-  'tuning.streamerLength',
-] as const;
+export const LENGTH_PATHS = pathsOfKind('length');
 
 export type LengthPath = (typeof LENGTH_PATHS)[number];
 
-/** A blank, buildable starting point used when there is neither an example nor a draft. */
+function setAt(o: Record<string, unknown>, path: string, value: unknown): void {
+  const parts = path.split('.');
+  let cur = o;
+  for (const p of parts.slice(0, -1)) cur = (cur[p] ??= {}) as Record<string, unknown>;
+  cur[parts[parts.length - 1]] = value;
+}
+
+/** A blank, buildable starting point used when there is neither an example nor a draft: the registry's defaults. */
 export function emptyValues(system: UnitSystem): FormValues {
   const L = (m: number) => lengthInputText(m, system, 4);
-  return {
-    name: 'Untitled coil',
-    secondary: {
-      formDiameter: system === 'imperial' ? '4 in' : '100 mm',
-      turns: '900',
-      wireMode: 'awg',
-      wire: { awg: '24', insulation: 'heavy', diameter: '', insulatedDiameter: '' },
-      windingLength: '',
-      elevation: L(0),
-    },
-    groundClearance: system === 'imperial' ? '20 in' : '500 mm',
-    topload: { shape: 'none', majorDiameter: L(0.45), minorDiameter: L(0.11), diameter: L(0.3), elevation: L(0.08) },
-    primary: {
-      enabled: false,
-      shape: 'flat',
-      innerDiameter: L(0.16),
-      turns: '10',
-      conductorDiameter: L(0.00635),
-      spacing: L(0.00635),
-      angle: '30 deg',
-      elevation: L(0),
-    },
-    tank: { mode: 'none', capacitance: '10 nF', unitCapacitance: '100 nF', unitVoltage: '2 kV', series: '10', parallel: '1' },
-    supply: { kind: 'none', voltage: '12 kV', current: '30 mA', lineFrequency: system === 'imperial' ? '60 Hz' : '50 Hz', breakRate: '', busVoltage: '340 V' },
-    tuning: { streamerMode: 'capacitance', streamerCapacitance: '', streamerLength: '', targetCoupling: '' },
-  };
+  const v: Record<string, unknown> = {};
+  for (const f of DESIGN_FIELDS) setAt(v, f.path, defaultText(f, system, L));
+  const switches: Array<[string, unknown]> = [
+    ['name', 'Untitled coil'],
+    ['secondary.wireMode', 'awg'],
+    ['topload.shape', 'none'],
+    ['primary.enabled', false],
+    ['tank.mode', 'none'],
+    ['supply.kind', 'none'],
+    ['tuning.streamerMode', 'capacitance'],
+  ];
+  for (const [path, value] of switches) setAt(v, path, value);
+  return v as unknown as FormValues;
 }
 
 const text = (v: number | string | undefined, kind: 'length' | 'other', system: UnitSystem): string => {

@@ -1,4 +1,7 @@
 import type { ReactNode } from 'react';
+import type { Result } from '~/solver';
+import { figureOf, resultFigure, type ResultFigureId } from '~/lib/design/figures';
+import { formatQuantity, type UnitSystem } from '~/lib/format';
 
 type Props = { label: ReactNode; value: string; id: string; note?: ReactNode; strong?: boolean };
 
@@ -24,4 +27,12 @@ export function Group({ title, children, id }: { title: string; children: ReactN
       {children}
     </section>
   );
+}
+
+type FigureProps = { result: Result; system: UnitSystem; figure: ResultFigureId; value?: string; note?: ReactNode; strong?: boolean };
+
+/** A result figure of the registry: its label, and its value formatted by its kind unless one is given. */
+export function FigureRow({ result, system, figure, value, note, strong }: FigureProps) {
+  const f = resultFigure(figure);
+  return <Row id={f.path} label={f.label} value={value ?? formatQuantity(figureOf(result, f), f.kind, { system })} note={note} strong={strong} />;
 }

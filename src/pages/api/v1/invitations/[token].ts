@@ -1,8 +1,7 @@
 import type { APIRoute } from 'astro';
-import { getDb } from '../../../../server/db';
 import { handle } from '../../../../server/http';
 import { describeInvitation } from '../../../../server/services/invitations';
 
 export const prerender = false;
 
-export const GET: APIRoute = handle(async ({ params }) => Response.json(await describeInvitation(getDb(), params.token!)));
+export const GET: APIRoute = handle(async ({ params }) => Response.json(await describeInvitation(params.token!)));

@@ -1,12 +1,11 @@
 import type { APIRoute } from 'astro';
-import { getDb } from '../../../../../server/db';
-import { handle, requireUser } from '../../../../../server/http';
-import { readOptionalJson } from '../../../../../server/optional-json';
+import { copyDesignBodySchema } from '../../../../../lib/api/contracts';
+import { handle, parseBody, requireUser } from '../../../../../server/http';
 import { duplicateDesign } from '../../../../../server/services/revisions';
 
 export const prerender = false;
 
 export const POST: APIRoute = handle(async ({ locals, params, request }) => {
   const u = requireUser(locals);
-  return Response.json(await duplicateDesign(getDb(), u, params.id!, await readOptionalJson(request)), { status: 201 });
+  return Response.json(await duplicateDesign(u, params.id!, await parseBody(request, copyDesignBodySchema, { optional: true })), { status: 201 });
 });

@@ -1,5 +1,4 @@
 import type { APIRoute } from 'astro';
-import { getDb } from '../../../../../server/db';
 import { handle, requireUser } from '../../../../../server/http';
 import { exportDesign } from '../../../../../server/services/import-export';
 
@@ -7,7 +6,7 @@ export const prerender = false;
 
 export const GET: APIRoute = handle(async ({ locals, params }) => {
   const u = requireUser(locals);
-  const { file, fileName } = await exportDesign(getDb(), u, params.id!);
+  const { file, fileName } = await exportDesign(u, params.id!);
   return new Response(JSON.stringify(file, null, 2) + '\n', {
     headers: {
       'content-type': 'application/json; charset=utf-8',

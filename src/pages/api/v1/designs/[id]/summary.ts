@@ -1,5 +1,4 @@
 import type { APIRoute } from 'astro';
-import { getDb } from '../../../../../server/db';
 import { handle, requireUser } from '../../../../../server/http';
 import { parseSummaryFormat, summaryForDesign } from '../../../../../server/services/summary';
 
@@ -8,6 +7,6 @@ export const prerender = false;
 export const GET: APIRoute = handle(async ({ locals, params, url }) => {
   const u = requireUser(locals);
   const format = parseSummaryFormat(url);
-  const text = await summaryForDesign(getDb(), u, params.id!, format);
+  const text = await summaryForDesign(u, params.id!, format);
   return new Response(text, { headers: { 'content-type': `${format === 'markdown' ? 'text/markdown' : 'text/plain'}; charset=utf-8` } });
 });

@@ -1,10 +1,7 @@
 import type { APIRoute } from 'astro';
-import { getDb } from '../../../../../server/db';
 import { handle } from '../../../../../server/http';
 import { parseTroubleshootQuery, troubleshootDesign } from '../../../../../server/services/troubleshoot';
 
 export const prerender = false;
 
-export const GET: APIRoute = handle(async ({ locals, params, url }) =>
-  Response.json(await troubleshootDesign(getDb(), locals.user, params.id!, parseTroubleshootQuery(url))),
-);
+export const GET: APIRoute = handle(async ({ locals, params, url }) => Response.json(await troubleshootDesign(locals.user, params.id!, parseTroubleshootQuery(url))));

@@ -1,5 +1,4 @@
 import type { APIRoute } from 'astro';
-import { getDb } from '../../../../../server/db';
 import { handle, requireUser } from '../../../../../server/http';
 import { acceptInvitation } from '../../../../../server/services/invitations';
 
@@ -7,5 +6,5 @@ export const prerender = false;
 
 export const POST: APIRoute = handle(async ({ locals, params }) => {
   const u = requireUser(locals);
-  return Response.json(await acceptInvitation(getDb(), u, params.token!));
+  return Response.json(await acceptInvitation(u, params.token!));
 });

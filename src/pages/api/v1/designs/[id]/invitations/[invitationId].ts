@@ -1,5 +1,4 @@
 import type { APIRoute } from 'astro';
-import { getDb } from '../../../../../../server/db';
 import { handle, requireUser } from '../../../../../../server/http';
 import { revokeInvitation } from '../../../../../../server/services/invitations';
 
@@ -7,6 +6,6 @@ export const prerender = false;
 
 export const DELETE: APIRoute = handle(async ({ locals, params }) => {
   const u = requireUser(locals);
-  await revokeInvitation(getDb(), u, params.id!, params.invitationId!);
+  await revokeInvitation(u, params.id!, params.invitationId!);
   return new Response(null, { status: 204 });
 });

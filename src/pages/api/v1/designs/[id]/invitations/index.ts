@@ -1,6 +1,6 @@
 import type { APIRoute } from 'astro';
-import { getDb } from '../../../../../../server/db';
-import { ApiError, handle, readJson, requireUser } from '../../../../../../server/http';
+import { createInvitationBodySchema } from '../../../../../../lib/api/contracts';
+import { ApiError, handle, parseBody, requireUser } from '../../../../../../server/http';
 import { allow } from '../../../../../../server/rate-limit';
 import { siteOrigin } from '../../../../../../server/site-url';
 import { createInvitation, listInvitations } from '../../../../../../server/services/invitations';
@@ -12,13 +12,13 @@ const PER_MINUTE = 20;
 
 export const GET: APIRoute = handle(async ({ locals, params }) => {
   const u = requireUser(locals);
-  return Response.json({ invitations: await listInvitations(getDb(), u, params.id!) });
+  return Response.json({ invitations: await listInvitations(u, params.id!) });
 });
 
 export const POST: APIRoute = handle(async ({ locals, params, request }) => {
   const u = requireUser(locals);
   if (!allow('invite', u.id, PER_MINUTE)) throw new ApiError('rate_limited');
   // Links in mail use the configured site address, never the request's Host header.
-  const created = await createInvitation(getDb(), u, params.id!, await readJson(request), siteOrigin());
+  const created = await createInvitation(u, params.id!, await parseBody(request, createInvitationBodySchema), siteOrigin());
   return Response.json(created, { status: 201 });
 });

@@ -1,5 +1,4 @@
 import type { APIRoute } from 'astro';
-import { getDb } from '../../../../../../server/db';
 import { handle, requireUser } from '../../../../../../server/http';
 import { deleteMeasurement } from '../../../../../../server/services/measurements';
 
@@ -7,6 +6,6 @@ export const prerender = false;
 
 export const DELETE: APIRoute = handle(async ({ locals, params }) => {
   const u = requireUser(locals);
-  await deleteMeasurement(getDb(), u, params.id!, params.measurementId!);
+  await deleteMeasurement(u, params.id!, params.measurementId!);
   return new Response(null, { status: 204 });
 });

@@ -1,5 +1,4 @@
 import type { APIRoute } from 'astro';
-import { getDb } from '../../../../../../server/db';
 import { handle, requireUser } from '../../../../../../server/http';
 import { listMembers } from '../../../../../../server/services/members';
 
@@ -7,5 +6,5 @@ export const prerender = false;
 
 export const GET: APIRoute = handle(async ({ locals, params }) => {
   const u = requireUser(locals);
-  return Response.json({ members: await listMembers(getDb(), u, params.id!) });
+  return Response.json({ members: await listMembers(u, params.id!) });
 });

@@ -1,13 +1,12 @@
 import type { APIRoute } from 'astro';
-import { getDb } from '../../../../../../server/db';
-import { ApiError, handle, requireUser } from '../../../../../../server/http';
-import { getRevision } from '../../../../../../server/services/designs';
+import { revisionNumberParamSchema } from '../../../../../../lib/api/contracts';
+import { handle, parseParam, requireUser } from '../../../../../../server/http';
+import { getRevision } from '../../../../../../server/services/revisions';
 
 export const prerender = false;
 
 export const GET: APIRoute = handle(async ({ locals, params }) => {
   const u = requireUser(locals);
-  const n = Number(params.revision);
-  if (!Number.isInteger(n) || n < 1) throw new ApiError('not_found', 'No such revision.');
-  return Response.json(await getRevision(getDb(), u, params.id!, n));
+  const n = parseParam(params.revision, revisionNumberParamSchema, 'No such revision.');
+  return Response.json(await getRevision(u, params.id!, n));
 });
