@@ -55,7 +55,11 @@ export const onRequest = defineMiddleware(async (context, next) => {
   } catch (e) {
     console.error('[session]', e);
   }
-  const response = await next();
+  let response = await next();
+  // A path under /api/ that matches no endpoint gets the contract's JSON error, not the HTML 404 page.
+  if (response.status === 404 && url.pathname.startsWith('/api/') && (response.headers.get('content-type') ?? '').startsWith('text/html')) {
+    response = errorResponse('not_found', 'There is no such API endpoint.');
+  }
   // A route that set the session cookie itself (sign-in, sign-out) has the last word on it.
   const own = response.headers.getSetCookie().some((c) => /better-auth\.session_/.test(c));
   const finished = await finishResponse(request, response, {
