@@ -6,7 +6,7 @@ import { errorResponse } from './server/http';
 import { toSessionUser } from './server/session';
 import { checkSameOrigin } from './server/security/origin';
 import { finishResponse } from './server/security/respond';
-import { cachedPage, keepPage, sharedPageKey } from './server/security/page-cache';
+import { cachedPage, hasSessionCookie, keepPage, sharedPageKey } from './server/security/page-cache';
 import { HTTPS_HEADER } from './server/security/forwarded';
 
 let origins: ReadonlySet<string> | undefined;
@@ -40,20 +40,23 @@ export const onRequest = defineMiddleware(async (context, next) => {
 
   await dbReady();
   let setCookies: string[] = [];
-  try {
-    const auth = getAuth();
-    let { headers, response: found } = await auth.api.getSession({ headers: request.headers, returnHeaders: true });
-    if (found && changedWithin(found.user.id, sessionCacheMs())) {
-      // The cached copy may predate the change: ask the database (this also rewrites the cookie).
-      ({ headers, response: found } = await auth.api.getSession({ headers: request.headers, returnHeaders: true, query: { disableCookieCache: true } }));
+  // Without a session cookie there is no session to find: skip better-auth's lookup altogether.
+  if (hasSessionCookie(request)) {
+    try {
+      const auth = getAuth();
+      let { headers, response: found } = await auth.api.getSession({ headers: request.headers, returnHeaders: true });
+      if (found && changedWithin(found.user.id, sessionCacheMs())) {
+        // The cached copy may predate the change: ask the database (this also rewrites the cookie).
+        ({ headers, response: found } = await auth.api.getSession({ headers: request.headers, returnHeaders: true, query: { disableCookieCache: true } }));
+      }
+      setCookies = headers.getSetCookie();
+      if (found && !(found.user as { banned?: boolean }).banned) {
+        context.locals.user = toSessionUser(found.user as Record<string, unknown>);
+        context.locals.session = { id: found.session.id, expiresAt: new Date(found.session.expiresAt) };
+      }
+    } catch (e) {
+      console.error('[session]', e);
     }
-    setCookies = headers.getSetCookie();
-    if (found && !(found.user as { banned?: boolean }).banned) {
-      context.locals.user = toSessionUser(found.user as Record<string, unknown>);
-      context.locals.session = { id: found.session.id, expiresAt: new Date(found.session.expiresAt) };
-    }
-  } catch (e) {
-    console.error('[session]', e);
   }
   let response = await next();
   // A path under /api/ that matches no endpoint gets the contract's JSON error, not the HTML 404 page.
