@@ -11,6 +11,14 @@ import globals from 'globals';
 /** Packages the solver may import: pure math only. */
 const SOLVER_PACKAGES = ['@stdlib/', 'ml-matrix'];
 
+/** The solver's answer depends on its input alone: no clock, randomness, DOM, storage or network. */
+const SOLVER_PURE = 'The solver is pure: no clock, randomness, DOM, storage or network; pass what it needs as input.';
+const SOLVER_FORBIDDEN_GLOBALS = [
+  'fetch', 'XMLHttpRequest', 'WebSocket', 'document', 'window', 'navigator', 'location', 'localStorage',
+  'sessionStorage', 'indexedDB', 'performance', 'crypto', 'process', 'setTimeout', 'setInterval',
+];
+
+/** @param {string} target */
 const serverZone = (target) => ({
   target,
   from: './src/server',
@@ -80,6 +88,15 @@ export default tseslint.config(
   {
     files: ['src/solver/**/*.ts'],
     rules: {
+      'no-restricted-globals': ['error', ...SOLVER_FORBIDDEN_GLOBALS.map((name) => ({ name, message: SOLVER_PURE }))],
+      'no-restricted-syntax': [
+        'error',
+        { selector: "MemberExpression[object.name='Date'][property.name='now']", message: SOLVER_PURE },
+        { selector: "NewExpression[callee.name='Date']", message: SOLVER_PURE },
+        { selector: "CallExpression[callee.name='Date']", message: SOLVER_PURE },
+        { selector: "MemberExpression[object.name='Math'][property.name='random']", message: SOLVER_PURE },
+        { selector: "MemberExpression[object.name='globalThis']", message: SOLVER_PURE },
+      ],
       'no-restricted-imports': [
         'error',
         {

@@ -1,5 +1,5 @@
 import { useId, type ReactNode } from 'react';
-import { safetyNotes, SAFETY_PAGE, type SafetyKind } from './safety-notes';
+import { safetyNotes, SAFETY_PAGE, type SafetyKind } from '../lib/content/safety-notes';
 
 type Props = {
   kind: SafetyKind;

@@ -5,7 +5,7 @@
 export function safeNext(raw: string | null | undefined, fallback: string): string {
   if (!raw) return fallback;
   if (!raw.startsWith('/') || raw.startsWith('//')) return fallback;
-  if (/[\\\u0000-\u001f\u007f]/.test(raw)) return fallback;
+  if (raw.includes('\\') || [...raw].some((ch) => ch.charCodeAt(0) < 0x20 || ch.charCodeAt(0) === 0x7f)) return fallback;
   try {
     const u = new URL(raw, 'http://coilwright.invalid');
     if (u.origin !== 'http://coilwright.invalid') return fallback;

@@ -10,7 +10,6 @@ import type {
   SolverWarning,
   SupplyResult,
   SystemResult,
-  TankResult,
   ToploadResult,
   TuningResult,
   UncertaintyResult,

@@ -1,38 +1,20 @@
 import { expect } from 'vitest';
-import { Client, linkIn, waitForMail } from '../helpers/client';
+import { linkIn, waitForMail, type Client } from '../helpers/client';
+import { signUp } from '../helpers/accounts';
 import { exampleDesigns } from '../../src/lib/design/examples';
 
 export const toroidCoil = exampleDesigns[1].design;
 export const sphereCoil = exampleDesigns[0].design;
 
-let seq = 0;
-/** A unique address per call so tests never meet each other's accounts or mail. */
-export function uniqueEmail(who: string): string {
-  seq += 1;
-  return `${who}-${process.pid}-${seq}-${Math.random().toString(36).slice(2, 8)}@example.test`;
-}
-
-export async function signedUp(base: string, name: string, email = uniqueEmail(name.toLowerCase().replace(/\W+/g, '-'))) {
-  const c = new Client(base);
-  const { user } = await c.signUp(name, email);
-  return { c, email, id: user.id };
-}
-
 /** A new account whose address is confirmed through the real mailed link. */
 export async function verifiedUser(base: string, name: string) {
-  const u = await signedUp(base, name);
+  const u = await signUp(base, name);
   const mail = await waitForMail(base, u.email, 'Confirm');
   const r = await fetch(linkIn(mail.text), { redirect: 'manual' });
   expect([200, 302]).toContain(r.status);
   const me = await (await u.c.get('/api/v1/me')).json();
   expect(me.user.emailVerified).toBe(true);
   return u;
-}
-
-export async function createDesign(c: Client, name: string, design: unknown = toroidCoil): Promise<{ id: string; revision: number }> {
-  const r = await c.post('/api/v1/designs', { name, design });
-  expect(r.status).toBe(201);
-  return r.json();
 }
 
 export function tokenFromLink(link: string, prefix: string): string {

@@ -1,7 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startServer, type TestServer } from '../helpers/server';
 import type { Client } from '../helpers/client';
-import { createDesign, signedUp, toroidCoil } from './designs-fixtures';
+import { createDesign, signUp } from '../helpers/accounts';
+import { toroidCoil } from './designs-fixtures';
 
 let s: TestServer;
 beforeAll(async () => {
@@ -19,7 +20,7 @@ const file = (over: Record<string, unknown> = {}) => ({ format: 'coilwright-desi
 
 describe('import and export', () => {
   it('GET /api/v1/designs/:id/export downloads the documented format as an attachment', async () => {
-    const { c } = await signedUp(s.url, 'Export Eli');
+    const { c } = await signUp(s.url, 'Export Eli');
     const { id } = await createDesign(c, 'Fjordside coil / mk 2');
     const r = await c.get(`/api/v1/designs/${id}/export`);
     expect(r.status).toBe(200);
@@ -32,7 +33,7 @@ describe('import and export', () => {
   });
 
   it('POST /api/v1/designs/import of an exported file makes an equal design at revision 1', async () => {
-    const { c } = await signedUp(s.url, 'Round Trip');
+    const { c } = await signUp(s.url, 'Round Trip');
     const { id } = await createDesign(c, 'Round trip');
     const exported = await (await c.get(`/api/v1/designs/${id}/export`)).json();
     const r = await c.post('/api/v1/designs/import', exported);
@@ -46,7 +47,7 @@ describe('import and export', () => {
   });
 
   it('POST /api/v1/designs/import refuses malformed files with a message per field and creates nothing', async () => {
-    const { c } = await signedUp(s.url, 'Malformed Mo');
+    const { c } = await signUp(s.url, 'Malformed Mo');
     await createDesign(c, 'Existing');
     const before = await count(c);
     const cases: Array<{ body: unknown; path: string }> = [
@@ -74,7 +75,7 @@ describe('import and export', () => {
   });
 
   it('POST /api/v1/designs/import over 256 kB is 413 and creates nothing', async () => {
-    const { c } = await signedUp(s.url, 'Large Lu');
+    const { c } = await signUp(s.url, 'Large Lu');
     const big = file({ padding: 'x'.repeat(300 * 1024) });
     const r = await c.post('/api/v1/designs/import', big);
     expect(r.status).toBe(413);
@@ -83,9 +84,9 @@ describe('import and export', () => {
   });
 
   it('import and export need sign-in; export of a design without a role is 404', async () => {
-    const owner = await signedUp(s.url, 'Owner Oli');
+    const owner = await signUp(s.url, 'Owner Oli');
     const { id } = await createDesign(owner.c, 'Private coil 5521');
-    const stranger = await signedUp(s.url, 'Stranger Sia');
+    const stranger = await signUp(s.url, 'Stranger Sia');
     const r = await stranger.c.get(`/api/v1/designs/${id}/export`);
     expect(r.status).toBe(404);
     expect(await r.text()).not.toContain('Private coil 5521');

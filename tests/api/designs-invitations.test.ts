@@ -1,7 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startServer, type TestServer } from '../helpers/server';
 import { Client, linkIn, waitForMail } from '../helpers/client';
-import { addMember, createDesign, signedUp, tokenFromLink, toroidCoil, uniqueEmail, verifiedUser } from './designs-fixtures';
+import { createDesign, signUp, uniqueEmail } from '../helpers/accounts';
+import { addMember, tokenFromLink, toroidCoil, verifiedUser } from './designs-fixtures';
 
 let s: TestServer;
 beforeAll(async () => {
@@ -14,7 +15,7 @@ afterAll(async () => {
 
 describe('invitations', () => {
   it('POST /api/v1/designs/:id/invitations from an unconfirmed owner is 403 email_not_verified and sends nothing', async () => {
-    const owner = await signedUp(s.url, 'Unconfirmed Uma');
+    const owner = await signUp(s.url, 'Unconfirmed Uma');
     const { id } = await createDesign(owner.c, 'Unconfirmed owner coil');
     const to = uniqueEmail('nobody');
     const r = await owner.c.post(`/api/v1/designs/${id}/invitations`, { email: to, role: 'editor' });
@@ -60,7 +61,7 @@ describe('invitations', () => {
     // The link is single-use.
     const again = await new Client(s.url).get(`/api/v1/invitations/${token}`);
     expect(again.status).toBe(404);
-    const stranger = await signedUp(s.url, 'Forwarded Fay');
+    const stranger = await signUp(s.url, 'Forwarded Fay');
     expect((await stranger.c.post(`/api/v1/invitations/${token}/accept`)).status).toBe(404);
     expect((await stranger.c.get(`/api/v1/designs/${id}`)).status).toBe(404);
     // Accepted invitations leave the open list.
@@ -87,7 +88,7 @@ describe('invitations', () => {
   it('a viewer reads but cannot save (403) and the design is unchanged', async () => {
     const owner = await verifiedUser(s.url, 'Owner Olga');
     const { id } = await createDesign(owner.c, 'Viewer check coil');
-    const viewer = await signedUp(s.url, 'Viewer Vala');
+    const viewer = await signUp(s.url, 'Viewer Vala');
     await addMember(s.url, owner.c, id, viewer, 'viewer');
     expect((await (await viewer.c.get(`/api/v1/designs/${id}`)).json()).role).toBe('viewer');
     const r = await viewer.c.put(`/api/v1/designs/${id}`, { name: 'Viewer was here', design: toroidCoil, revision: 1 });
@@ -99,7 +100,7 @@ describe('invitations', () => {
   it('inviting someone who already has a role is 409; a bad role or address is 400 naming the field', async () => {
     const owner = await verifiedUser(s.url, 'Owner Oda');
     const { id } = await createDesign(owner.c, 'Duplicate invite coil');
-    const member = await signedUp(s.url, 'Member Max');
+    const member = await signUp(s.url, 'Member Max');
     await addMember(s.url, owner.c, id, member, 'viewer');
     const dup = await owner.c.post(`/api/v1/designs/${id}/invitations`, { email: member.email.toUpperCase(), role: 'editor' });
     expect(dup.status).toBe(409);
@@ -131,7 +132,7 @@ describe('members and ownership', () => {
   it('PATCH /api/v1/designs/:id/members/:userId turns a viewer into an editor who can then save', async () => {
     const owner = await verifiedUser(s.url, 'Owner Pia');
     const { id } = await createDesign(owner.c, 'Promote coil');
-    const m = await signedUp(s.url, 'Member Mats');
+    const m = await signUp(s.url, 'Member Mats');
     await addMember(s.url, owner.c, id, m, 'viewer');
     expect((await m.c.put(`/api/v1/designs/${id}`, { design: toroidCoil, revision: 1 })).status).toBe(403);
     const r = await owner.c.patch(`/api/v1/designs/${id}/members/${m.id}`, { role: 'editor' });
@@ -146,8 +147,8 @@ describe('members and ownership', () => {
   it('GET /api/v1/designs/:id/members shows addresses to the owner only', async () => {
     const owner = await verifiedUser(s.url, 'Owner Ravn');
     const { id } = await createDesign(owner.c, 'Members coil');
-    const m = await signedUp(s.url, 'Member Mira');
-    const other = await signedUp(s.url, 'Member Mo');
+    const m = await signUp(s.url, 'Member Mira');
+    const other = await signUp(s.url, 'Member Mo');
     await addMember(s.url, owner.c, id, m, 'editor');
     await addMember(s.url, owner.c, id, other, 'viewer');
     const asOwner = (await (await owner.c.get(`/api/v1/designs/${id}/members`)).json()).members;
@@ -163,8 +164,8 @@ describe('members and ownership', () => {
   it('DELETE /api/v1/designs/:id/members/:userId removes a member, who then gets 404; a member may leave', async () => {
     const owner = await verifiedUser(s.url, 'Owner Sig');
     const { id } = await createDesign(owner.c, 'Removal coil 8802');
-    const m = await signedUp(s.url, 'Member Rolf');
-    const leaver = await signedUp(s.url, 'Member Lene');
+    const m = await signUp(s.url, 'Member Rolf');
+    const leaver = await signUp(s.url, 'Member Lene');
     await addMember(s.url, owner.c, id, m, 'editor');
     await addMember(s.url, owner.c, id, leaver, 'viewer');
     expect((await owner.c.del(`/api/v1/designs/${id}/members/${m.id}`)).status).toBe(204);
@@ -180,8 +181,8 @@ describe('members and ownership', () => {
   it('POST /api/v1/designs/:id/transfer hands the design to a member; the old owner becomes an editor', async () => {
     const owner = await verifiedUser(s.url, 'Owner Tove');
     const { id } = await createDesign(owner.c, 'Transfer coil');
-    const heir = await signedUp(s.url, 'Heir Hugo');
-    const outsider = await signedUp(s.url, 'Outsider Ola');
+    const heir = await signUp(s.url, 'Heir Hugo');
+    const outsider = await signUp(s.url, 'Outsider Ola');
     const notMember = await owner.c.post(`/api/v1/designs/${id}/transfer`, { userId: outsider.id });
     expect(notMember.status).toBe(400);
     expect((await notMember.json()).error.issues[0].path).toBe('userId');

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startServer, type TestServer } from '../helpers/server';
-import { createDesign, signedUp, sphereCoil, toroidCoil } from './designs-fixtures';
+import { createDesign, signUp } from '../helpers/accounts';
+import { sphereCoil, toroidCoil } from './designs-fixtures';
 
 let s: TestServer;
 beforeAll(async () => {
@@ -14,7 +15,7 @@ const biggerTopload = { ...toroidCoil, topload: { shape: 'toroid', majorDiameter
 
 describe('revisions', () => {
   it('PUT /api/v1/designs/:id with a stale revision is 409 and the stored design is unchanged', async () => {
-    const { c } = await signedUp(s.url, 'Stale Stig');
+    const { c } = await signUp(s.url, 'Stale Stig');
     const { id } = await createDesign(c, 'Stale test');
     expect((await c.put(`/api/v1/designs/${id}`, { design: biggerTopload, revision: 1, message: 'bigger toroid' })).status).toBe(200);
     const stale = await c.put(`/api/v1/designs/${id}`, { name: 'Overwritten', design: sphereCoil, revision: 1 });
@@ -28,7 +29,7 @@ describe('revisions', () => {
   });
 
   it('PUT /api/v1/designs/:id with an invalid design is 400 naming the field and the stored design is unchanged', async () => {
-    const { c } = await signedUp(s.url, 'Invalid Ines');
+    const { c } = await signUp(s.url, 'Invalid Ines');
     const { id } = await createDesign(c, 'Invalid test');
     const bad = await c.put(`/api/v1/designs/${id}`, { design: { ...toroidCoil, secondary: { ...toroidCoil.secondary, turns: -5 } }, revision: 1 });
     expect(bad.status).toBe(400);
@@ -43,7 +44,7 @@ describe('revisions', () => {
   });
 
   it('GET /api/v1/designs/:id/revisions/:n opens an old revision read-only with its own result', async () => {
-    const { c } = await signedUp(s.url, 'Reader Rut');
+    const { c } = await signUp(s.url, 'Reader Rut');
     const { id } = await createDesign(c, 'History test');
     await c.put(`/api/v1/designs/${id}`, { design: biggerTopload, revision: 1, message: 'bigger toroid' });
     const r1 = await (await c.get(`/api/v1/designs/${id}/revisions/1`)).json();
@@ -58,7 +59,7 @@ describe('revisions', () => {
   });
 
   it('GET /api/v1/designs/:id/compare lists the changed inputs and the change in loaded frequency', async () => {
-    const { c } = await signedUp(s.url, 'Compare Cato');
+    const { c } = await signUp(s.url, 'Compare Cato');
     const { id } = await createDesign(c, 'Compare test');
     await c.put(`/api/v1/designs/${id}`, { design: biggerTopload, revision: 1 });
     const r = await c.get(`/api/v1/designs/${id}/compare?from=1&to=2`);
@@ -82,7 +83,7 @@ describe('revisions', () => {
   });
 
   it('POST /api/v1/designs/:id/revisions/:n/restore saves the old revision as a new one; a stale base is 409', async () => {
-    const { c } = await signedUp(s.url, 'Restore Rosa');
+    const { c } = await signUp(s.url, 'Restore Rosa');
     const { id } = await createDesign(c, 'Restore test');
     await c.put(`/api/v1/designs/${id}`, { name: 'Renamed', design: biggerTopload, revision: 1 });
     const r = await c.post(`/api/v1/designs/${id}/revisions/1/restore`, { revision: 2 });
@@ -99,7 +100,7 @@ describe('revisions', () => {
   });
 
   it('POST /api/v1/designs/:id/duplicate makes a new design at revision 1, leaving the original alone', async () => {
-    const { c } = await signedUp(s.url, 'Dup Dora');
+    const { c } = await signUp(s.url, 'Dup Dora');
     const { id } = await createDesign(c, 'Original');
     await c.put(`/api/v1/designs/${id}`, { design: biggerTopload, revision: 1 });
     const r = await c.post(`/api/v1/designs/${id}/duplicate`);
@@ -115,7 +116,7 @@ describe('revisions', () => {
   });
 
   it('PUT with only a new name keeps the design and adds a revision (rename)', async () => {
-    const { c } = await signedUp(s.url, 'Rename Rai');
+    const { c } = await signUp(s.url, 'Rename Rai');
     const { id } = await createDesign(c, 'Before');
     const r = await c.put(`/api/v1/designs/${id}`, { name: 'After', design: toroidCoil, revision: 1 });
     expect(r.status).toBe(200);

@@ -2,7 +2,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startServer, type TestServer } from '../helpers/server';
 import { Client } from '../helpers/client';
 import { demoAccounts } from '../../scripts/seed-demo';
-import { addMember, createDesign, signedUp, verifiedUser, sphereCoil, toroidCoil } from './designs-fixtures';
+import { createDesign, signUp } from '../helpers/accounts';
+import { addMember, verifiedUser, sphereCoil, toroidCoil } from './designs-fixtures';
 
 /**
  * Every designs route, called by each kind of person: the owner, an editor, a viewer, a site admin, a signed-in
@@ -21,9 +22,9 @@ let designId: string;
 beforeAll(async () => {
   s = await startServer();
   const owner = await verifiedUser(s.url, 'Owner Ode');
-  const editor = await signedUp(s.url, 'Editor Eda');
-  const viewer = await signedUp(s.url, 'Viewer Vik');
-  const stranger = await signedUp(s.url, 'Stranger Sten');
+  const editor = await signUp(s.url, 'Editor Eda');
+  const viewer = await signUp(s.url, 'Viewer Vik');
+  const stranger = await signUp(s.url, 'Stranger Sten');
   const admin = new Client(s.url);
   await admin.signIn(demoAccounts.admin.email, demoAccounts.admin.password);
   c = { owner: owner.c, editor: editor.c, viewer: viewer.c, admin, stranger: stranger.c, anonymous: new Client(s.url) };

@@ -1,7 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startServer, type TestServer } from '../helpers/server';
 import { Client } from '../helpers/client';
-import { createDesign, signedUp, toroidCoil } from './designs-fixtures';
+import { createDesign, signUp } from '../helpers/accounts';
+import { toroidCoil } from './designs-fixtures';
 
 const NAME = 'Marrowby bench coil 4410';
 let s: TestServer;
@@ -13,7 +14,7 @@ afterAll(async () => {
 });
 
 async function sharedDesign() {
-  const owner = await signedUp(s.url, 'Sharer Sol');
+  const owner = await signUp(s.url, 'Sharer Sol');
   const { id } = await createDesign(owner.c, NAME);
   const r = await owner.c.post(`/api/v1/designs/${id}/share`);
   expect(r.status).toBe(201);
@@ -98,7 +99,7 @@ describe('share links', () => {
   it('POST /api/v1/shared/:token/copy makes a new design at revision 1 owned by the signed-in visitor', async () => {
     const { token, owner, id } = await sharedDesign();
     expect((await new Client(s.url).post(`/api/v1/shared/${token}/copy`)).status).toBe(401);
-    const visitor = await signedUp(s.url, 'Visitor Vera');
+    const visitor = await signUp(s.url, 'Visitor Vera');
     const r = await visitor.c.post(`/api/v1/shared/${token}/copy`);
     expect(r.status).toBe(201);
     const copy = await r.json();
@@ -119,7 +120,7 @@ describe('share links', () => {
   it('POST /api/v1/shared/:token/copy with a revoked token is 404 and creates nothing', async () => {
     const { token, owner, id } = await sharedDesign();
     await owner.c.del(`/api/v1/designs/${id}/share/${token}`);
-    const visitor = await signedUp(s.url, 'Late Lars');
+    const visitor = await signUp(s.url, 'Late Lars');
     expect((await visitor.c.post(`/api/v1/shared/${token}/copy`)).status).toBe(404);
     expect((await (await visitor.c.get('/api/v1/designs')).json()).designs).toEqual([]);
   });
@@ -127,7 +128,7 @@ describe('share links', () => {
 
 describe('review summary', () => {
   it('GET /api/v1/designs/:id/summary?format=text lists inputs as given and key results with units', async () => {
-    const owner = await signedUp(s.url, 'Summary Sam');
+    const owner = await signUp(s.url, 'Summary Sam');
     const { id } = await createDesign(owner.c, NAME);
     const r = await owner.c.get(`/api/v1/designs/${id}/summary?format=text`);
     expect(r.status).toBe(200);
@@ -145,7 +146,7 @@ describe('review summary', () => {
   });
 
   it('GET /api/v1/designs/:id/summary?format=markdown gives Markdown tables; a bad format is 400 naming the field', async () => {
-    const owner = await signedUp(s.url, 'Summary Sue');
+    const owner = await signUp(s.url, 'Summary Sue');
     const { id } = await createDesign(owner.c, NAME);
     const r = await owner.c.get(`/api/v1/designs/${id}/summary?format=markdown`);
     expect(r.headers.get('content-type')).toMatch(/^text\/markdown/);

@@ -3,7 +3,7 @@ import { join, relative, resolve } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { z, type ZodObject } from 'zod';
 import { startServer, type TestServer } from '../helpers/server';
-import { createDesign, signedUp } from './designs-fixtures';
+import { createDesign, signUp } from '../helpers/accounts';
 import {
   apiErrorBodySchema,
   designListResponseSchema,
@@ -111,7 +111,7 @@ describe('the OpenAPI document is the contract', () => {
 
 describe('real answers match the contract', () => {
   it('GET /api/v1/designs/:id, GET /api/v1/designs and GET /api/v1/me parse with the contract schemas, with no member left undocumented', async () => {
-    const { c } = await signedUp(s.url, 'Ines Harbour');
+    const { c } = await signUp(s.url, 'Ines Harbour');
     const { id } = await createDesign(c, 'Open day coil');
     const one = await (await c.get(`/api/v1/designs/${id}`)).json();
     expect(designRecordSchema.strict().safeParse(one).error).toBeUndefined();
@@ -124,7 +124,7 @@ describe('real answers match the contract', () => {
   });
 
   it('a refused PATCH /api/v1/me answers with the contract’s error body naming the field', async () => {
-    const { c } = await signedUp(s.url, 'Odile Harbour');
+    const { c } = await signUp(s.url, 'Odile Harbour');
     const r = await c.patch('/api/v1/me', { unitSystem: 'cubits' });
     expect(r.status).toBe(400);
     const body = apiErrorBodySchema.parse(await r.json());

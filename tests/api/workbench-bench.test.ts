@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { PDFParse } from 'pdf-parse';
 import { startServer, type TestServer } from '../helpers/server';
 import { Client } from '../helpers/client';
+import { createDesign, signUp } from '../helpers/accounts';
 import { exampleDesigns } from '~/lib/design';
 
 type Result = {
@@ -20,17 +21,12 @@ let result: Result;
 
 beforeAll(async () => {
   s = await startServer();
-  owner = new Client(s.url);
-  stranger = new Client(s.url);
+  owner = (await signUp(s.url, 'Bench Owner')).c;
+  stranger = (await signUp(s.url, 'Bench Stranger')).c;
   anon = new Client(s.url);
-  await owner.signUp('Bench Owner', `bench-owner-${Date.now()}@example.test`);
-  await stranger.signUp('Bench Stranger', `bench-stranger-${Date.now()}@example.test`);
-  const design = exampleDesigns.find((e) => e.id === 'sign-transformer-toroid')!.design;
-  const r = await owner.post('/api/v1/designs', { name: 'Bench coil', design });
-  expect(r.status).toBe(201);
-  const body = await r.json();
-  id = body.id;
-  result = body.result;
+  const created = await createDesign(owner, 'Bench coil', exampleDesigns.find((e) => e.id === 'sign-transformer-toroid')!.design);
+  id = created.id;
+  result = created.result as Result;
 });
 afterAll(async () => {
   await s?.stop();

@@ -4,6 +4,7 @@ import { join } from 'node:path';
 import sharp from 'sharp';
 import { startServer, type TestServer } from '../helpers/server';
 import { Client } from '../helpers/client';
+import { createDesign, signUp } from '../helpers/accounts';
 import { exampleDesigns } from '~/lib/design';
 import { frequencies, resonantFrequency, touchstoneRlc } from '../fixtures/workbench/rlc-sweep';
 
@@ -14,10 +15,7 @@ let anon: Client;
 let id: string;
 
 async function newDesign(name: string): Promise<string> {
-  const design = exampleDesigns.find((e) => e.id === 'bench-sphere')!.design;
-  const r = await owner.post('/api/v1/designs', { name, design });
-  expect(r.status).toBe(201);
-  return (await r.json()).id;
+  return (await createDesign(owner, name, exampleDesigns.find((e) => e.id === 'bench-sphere')!.design)).id;
 }
 
 function form(bytes: Uint8Array<ArrayBuffer> | string, name: string, type: string): FormData {
@@ -47,11 +45,9 @@ let png: Uint8Array<ArrayBuffer>;
 
 beforeAll(async () => {
   s = await startServer();
-  owner = new Client(s.url);
-  stranger = new Client(s.url);
+  owner = (await signUp(s.url, 'Upload Owner')).c;
+  stranger = (await signUp(s.url, 'Upload Stranger')).c;
   anon = new Client(s.url);
-  await owner.signUp('Upload Owner', `upload-owner-${Date.now()}@example.test`);
-  await stranger.signUp('Upload Stranger', `upload-stranger-${Date.now()}@example.test`);
   id = await newDesign('Upload coil');
   png = new Uint8Array(await sharp({ create: { width: 640, height: 480, channels: 3, background: { r: 200, g: 120, b: 40 } } }).png().toBuffer());
 });

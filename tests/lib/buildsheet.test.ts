@@ -3,11 +3,8 @@ import { exampleDesigns, parseDesign } from '~/lib/design';
 import { solve, copperMass, type DesignSI } from '~/solver';
 import { buildSheet, calibratedTuning, mergeCalibration, readCalibration, sheetSections, suggestBank, suggestSpool, buildSheetQuerySchema } from '~/lib/buildsheet';
 import { tapPosition } from '~/lib/buildsheet/format';
+import { assertClose } from '../helpers/assertClose';
 
-function assertClose(got: number, expected: number, relTol: number, what: string) {
-  const rel = Math.abs(got - expected) / Math.abs(expected);
-  expect(rel, `${what}: got ${got}, expected ${expected}, tolerance ${relTol}`).toBeLessThanOrEqual(relTol);
-}
 
 function example(id: string): DesignSI {
   const ex = exampleDesigns.find((e) => e.id === id)!;

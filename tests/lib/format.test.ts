@@ -12,6 +12,7 @@ import {
   siParts,
 } from '~/lib/format';
 import { parseQuantity } from '~/lib/design';
+import { assertClose } from '../helpers/assertClose';
 
 // Exact conversion factors: the international inch and foot (1959 agreement), NIST SP 811 (2008),
 // Appendix B.8: 1 in = 0.0254 m, 1 ft = 0.3048 m exactly; the avoirdupois pound 0.453 592 37 kg exactly.
@@ -80,7 +81,7 @@ describe('lengthInputText', () => {
         const text = lengthInputText(m, system);
         const back = parseQuantity(text, 'length');
         expect(back.ok, `${m} m in ${system} gave "${text}"`).toBe(true);
-        if (back.ok) expect(Math.abs(back.value - m) / m).toBeLessThan(1e-5);
+        if (back.ok) assertClose(back.value, m, 1e-5, `"${text}" read back`);
       }
     }
   });
@@ -113,7 +114,7 @@ describe('convertLengthText', () => {
       const ours = readLength(text);
       const schema = parseQuantity(text, 'length');
       expect(schema.ok, text).toBe(true);
-      if (schema.ok) expect(Math.abs(ours!.metres - schema.value) / schema.value, text).toBeLessThan(1e-12);
+      if (schema.ok) assertClose(ours!.metres, schema.value, 1e-12, `readLength("${text}")`);
     }
     expect(convertLengthText('0.25 in', 'metric')).toBe('6.35 mm');
   });

@@ -1,11 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { findResonances, parseSweepCsv, parseSweepFile, parseTouchstone } from '~/lib/touchstone';
 import { frequencies, loadedQ, resonantFrequency, touchstoneRlc, type Format, type Rlc, type Unit } from '../fixtures/workbench/rlc-sweep';
+import { assertClose } from '../helpers/assertClose';
 
-function assertClose(got: number, expected: number, relTol: number, what: string) {
-  const rel = Math.abs(got - expected) / Math.abs(expected);
-  expect(rel, `${what}: got ${got}, expected ${expected}, tolerance ${relTol * 100} %`).toBeLessThanOrEqual(relTol);
-}
 
 // f0 = 503.29 kHz, between grid points of the sweep on purpose.
 const rlc: Rlc = { R: 10, L: 1e-3, C: 100e-12 };

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startServer, type TestServer } from '../helpers/server';
 import { Client } from '../helpers/client';
+import { createDesign, signUp } from '../helpers/accounts';
 import { formatLengthBoth } from '~/lib/format';
 import { PERIMETER_MARGIN } from '~/lib/event/perimeter';
 
@@ -25,23 +26,10 @@ const solidStateCoil = {
   supply: { kind: 'solid-state', busVoltage: '340 V' },
 };
 
-/** Signs up through better-auth as a browser would, with the Origin header its CSRF check expects. */
-async function signUp(c: Client, name: string, email: string): Promise<void> {
-  const r = await c.req('POST', '/api/auth/sign-up/email', { name, email, password: 'correct-horse-9' }, { origin: s.url });
-  expect(r.status, await r.clone().text()).toBe(200);
-}
-
-async function createDesign(c: Client, name: string, design: unknown): Promise<string> {
-  const r = await c.post('/api/v1/designs', { name, design });
-  expect(r.status, await r.clone().text()).toBe(201);
-  return ((await r.json()) as { id: string }).id;
-}
-
 describe('GET /designs/:id/event', () => {
   it('GET /designs/:id/event draws the perimeter from the spark-length estimate plus 10 ft for the owner', async () => {
-    const owner = new Client(s.url);
-    await signUp(owner, 'Event Owner', `event-owner-${Date.now()}@example.test`);
-    const id = await createDesign(owner, 'Open-day coil', sparkGapCoil);
+    const owner = (await signUp(s.url, 'Event Owner')).c;
+    const { id } = await createDesign(owner, 'Open-day coil', sparkGapCoil);
     const detail = (await (await owner.get(`/api/v1/designs/${id}`)).json()) as {
       result: { supply: { sparkLengthEstimate: number } };
     };
@@ -64,12 +52,10 @@ describe('GET /designs/:id/event', () => {
   });
 
   it('GET /designs/:id/event for a stranger is 404 and shows nothing of the design', async () => {
-    const owner = new Client(s.url);
-    await signUp(owner, 'Private Owner', `event-private-${Date.now()}@example.test`);
-    const id = await createDesign(owner, 'Secret workshop coil', sparkGapCoil);
+    const owner = (await signUp(s.url, 'Private Owner')).c;
+    const { id } = await createDesign(owner, 'Secret workshop coil', sparkGapCoil);
 
-    const stranger = new Client(s.url);
-    await signUp(stranger, 'Stranger', `event-stranger-${Date.now()}@example.test`);
+    const stranger = (await signUp(s.url, 'Stranger')).c;
     const r = await stranger.get(`/designs/${id}/event`);
     expect(r.status).toBe(404);
     expect(await r.text()).not.toContain('Secret workshop coil');
@@ -85,9 +71,8 @@ describe('GET /designs/:id/event', () => {
   });
 
   it('GET /designs/:id/event for a solid-state coil asks for a spark length and uses a stated one', async () => {
-    const owner = new Client(s.url);
-    await signUp(owner, 'Solid Owner', `event-solid-${Date.now()}@example.test`);
-    const id = await createDesign(owner, 'Solid-state coil', solidStateCoil);
+    const owner = (await signUp(s.url, 'Solid Owner')).c;
+    const { id } = await createDesign(owner, 'Solid-state coil', solidStateCoil);
 
     const ask = await (await owner.get(`/designs/${id}/event`)).text();
     expect(ask).toContain('data-testid="perimeter-missing"');
@@ -102,9 +87,8 @@ describe('GET /designs/:id/event', () => {
   });
 
   it('GET /designs/:id/event?spark=bad answers 400 with a message naming the field', async () => {
-    const owner = new Client(s.url);
-    await signUp(owner, 'Typo Owner', `event-typo-${Date.now()}@example.test`);
-    const id = await createDesign(owner, 'Typo coil', sparkGapCoil);
+    const owner = (await signUp(s.url, 'Typo Owner')).c;
+    const { id } = await createDesign(owner, 'Typo coil', sparkGapCoil);
     const r = await owner.get(`/designs/${id}/event?spark=${encodeURIComponent('3 kg')}`);
     expect(r.status).toBe(400);
     const html = await r.text();

@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { startServer, type TestServer } from '../helpers/server';
 import { referenceCases } from '~/lib/validation/cases';
+import { assertClose } from '../helpers/assertClose';
 
 let s: TestServer;
 let html = '';
@@ -41,9 +42,7 @@ describe('GET /validation', () => {
     expect(new Set(referenceCases.map((c) => c.id)).size).toBe(referenceCases.length);
     for (const c of referenceCases) {
       expect(c.source.trim().length, c.id).toBeGreaterThan(10);
-      const got = c.compute();
-      const rel = Math.abs(got - c.reference) / Math.abs(c.reference);
-      expect(rel, `${c.id}: inputs ${JSON.stringify(c.inputs)}, got ${got}, expected ${c.reference} ${c.unit}, tolerance ${c.tolerance}`).toBeLessThanOrEqual(c.tolerance);
+      assertClose(c.compute(), c.reference, c.tolerance, `${c.id} (${c.unit}) inputs ${JSON.stringify(c.inputs)}`);
     }
   });
 

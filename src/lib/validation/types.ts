@@ -15,13 +15,15 @@ export type ReferenceCase = {
   /** Author, title, year, table or equation of the reference value, with provenance marks. */
   source: string;
   kind: ReferenceKind;
-  /** Inputs as shown to a reader (SI numbers or short strings with units). */
-  inputs: Record<string, string | number>;
+  /** Inputs as shown to a reader (numbers, or values with their unit); made by `defineCase`. */
+  inputs: Record<string, string | number | boolean>;
+  /** The same inputs as `compute` receives them (quantities in SI). */
+  received: Readonly<Record<string, string | number | boolean>>;
   /** The reference value, in `unit`. */
   reference: number;
   unit: string;
   /** Relative tolerance within which the solver must agree. */
   tolerance: number;
-  /** The solver's value, in `unit`. */
+  /** The solver's value, in `unit`, computed from `received` only. */
   compute: () => number;
 };

@@ -1,6 +1,6 @@
 import PDFDocument from 'pdfkit';
 import type { SheetSection } from '../../lib/buildsheet';
-import { safetyNotes } from '../../components/safety-notes';
+import { safetyNotes } from '../../lib/content/safety-notes';
 import { winAnsi } from './text';
 
 export interface BuildSheetPdfInput {

@@ -90,6 +90,11 @@ async function readUpload(request: Request): Promise<File> {
 
 export async function listAttachments(u: SessionUser | null, designId: string): Promise<AttachmentListResponse> {
   await authorize(designId, u, 'read');
+  return attachmentsOf(designId);
+}
+
+/** The photos and instrument files of a design already authorized, newest first. */
+export async function attachmentsOf(designId: string): Promise<AttachmentListResponse> {
   const rows = await database().select().from(attachments).where(eq(attachments.designId, designId)).orderBy(desc(attachments.createdAt));
   return { attachments: rows.map(view) };
 }

@@ -4,14 +4,12 @@ import type { z } from 'zod';
 import { database } from './database';
 import { designs, measurements } from '../db/schema';
 import type { CalibrationResponse, calibrationBodySchema, Measurement, MeasurementListResponse, measurementBodySchema } from '../../lib/api/contracts';
-import type { DesignInput } from '../../lib/design';
 import type { SessionUser } from '../session';
 import { ApiError } from '../http';
 import { authorize } from './access';
-import { solveStored } from './solve';
-import { parseDesign } from '../../lib/design';
+import { solvedRow, solveStored, type SolvedDesign } from './solve';
 import { MEASUREMENT_KINDS, predictionFor, relativeError, type MeasurementKind } from '../../lib/troubleshoot';
-import { calibratedTuning, mergeCalibration, readCalibration, type Calibration } from '../../lib/buildsheet';
+import { calibratedTuning, mergeCalibration, readCalibration } from '../../lib/buildsheet';
 
 type Row = typeof measurements.$inferSelect;
 
@@ -41,8 +39,13 @@ export async function measurementRows(designId: string): Promise<Row[]> {
 
 export async function listMeasurements(u: SessionUser | null, designId: string): Promise<MeasurementListResponse> {
   const { row } = await authorize(designId, u, 'read');
-  const result = solveStored(row.design);
-  return { measurements: (await measurementRows(designId)).map((r) => view(r, result)) };
+  return measurementsOf(solvedRow(row));
+}
+
+/** The bench log of a design already authorized, with each reading beside the prediction of its solved result. */
+export async function measurementsOf(d: SolvedDesign): Promise<MeasurementListResponse> {
+  const rows = await measurementRows(d.id);
+  return { measurements: rows.map((r) => view(r, d.result)) };
 }
 
 export async function createMeasurement(u: SessionUser, designId: string, b: z.output<typeof measurementBodySchema>): Promise<Measurement> {
@@ -73,10 +76,10 @@ export async function deleteMeasurement(u: SessionUser, designId: string, measur
   if (res.length === 0) throw new ApiError('not_found', 'No such measurement.');
 }
 
-function calibrationView(design: DesignInput, stored: Calibration | null): CalibrationResponse {
-  const calibration = readCalibration(stored);
-  const parsed = parseDesign(design);
-  const result = parsed.ok ? solveStored(design) : null;
+/** The stored calibration of a design already authorized, with the predicted and the calibrated tuning. */
+export function calibrationOf(d: Pick<SolvedDesign, 'parsed' | 'result' | 'calibration'>): CalibrationResponse {
+  const calibration = readCalibration(d.calibration);
+  const { parsed, result } = d;
   const cal = parsed.ok && result ? calibratedTuning(parsed.design, result, calibration) : null;
   return {
     calibration,
@@ -87,12 +90,12 @@ function calibrationView(design: DesignInput, stored: Calibration | null): Calib
 
 export async function getCalibration(u: SessionUser | null, designId: string): Promise<CalibrationResponse> {
   const { row } = await authorize(designId, u, 'read');
-  return calibrationView(row.design, row.calibration);
+  return calibrationOf(solvedRow(row));
 }
 
 export async function putCalibration(u: SessionUser, designId: string, update: z.output<typeof calibrationBodySchema>): Promise<CalibrationResponse> {
   const { row } = await authorize(designId, u, 'write');
   const next = mergeCalibration(readCalibration(row.calibration), update);
   await database().update(designs).set({ calibration: next }).where(eq(designs.id, designId));
-  return calibrationView(row.design, next);
+  return calibrationOf(solvedRow({ ...row, calibration: next }));
 }

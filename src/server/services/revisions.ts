@@ -21,6 +21,11 @@ async function revisionRow(designId: string, n: number) {
 /** Every saved revision, newest first. */
 export async function listRevisions(u: SessionUser, id: string): Promise<RevisionListItem[]> {
   await authorize(id, u, 'read');
+  return revisionsOf(id);
+}
+
+/** Every saved revision of a design already authorized, newest first. */
+export async function revisionsOf(id: string): Promise<RevisionListItem[]> {
   const rows = await database()
     .select({ r: designRevisions, authorName: user.name })
     .from(designRevisions)
@@ -40,10 +45,14 @@ export async function listRevisions(u: SessionUser, id: string): Promise<Revisio
 /** One revision, read-only, with its result. */
 export async function getRevision(u: SessionUser, id: string, revision: number): Promise<RevisionRecord> {
   await authorize(id, u, 'read');
+  return revisionOf(id, revision);
+}
+
+/** One revision of a design already authorized, read-only, with its result. */
+export async function revisionOf(id: string, revision: number): Promise<RevisionRecord> {
   const r = await revisionRow(id, revision);
   return { revision: r.revision, name: r.name, design: r.design, createdAt: r.createdAt.toISOString(), message: r.message, result: solveStored(r.design) };
 }
-
 
 /**
  * Saves an old revision's name and design as a new revision. With `revision` in the body the save is refused
@@ -64,6 +73,11 @@ export async function restoreRevision(u: SessionUser, designId: string, n: numbe
 /** Two revisions side by side: the inputs that changed and what that did to the key results. */
 export async function compareRevisions(u: SessionUser, designId: string, from: number, to: number): Promise<CompareResponse> {
   await authorize(designId, u, 'read');
+  return compareOf(designId, from, to);
+}
+
+/** Two revisions of a design already authorized, side by side. */
+export async function compareOf(designId: string, from: number, to: number): Promise<CompareResponse> {
   const [a, b] = [await revisionRow(designId, from), await revisionRow(designId, to)];
   const diff = compareDesigns({ design: a.design, result: solveStored(a.design) }, { design: b.design, result: solveStored(b.design) });
   const side = (r: typeof a) => ({ revision: r.revision, name: r.name, createdAt: r.createdAt.toISOString(), message: r.message });

@@ -1,4 +1,4 @@
-import { parseDesign } from '../../lib/design';
+import { parseDesign, type DesignSI, type ParseDesignResult } from '../../lib/design';
 import type { ApiIssue, DesignInput, Result, ResultSummary } from '../../lib/api/contracts';
 import { solve } from '../../solver';
 import { ApiError } from '../http';
@@ -54,4 +54,37 @@ export function resultSummary(result: Result | null): ResultSummary | null {
 
 export function prefixIssues(issues: ApiIssue[], prefix: string): ApiIssue[] {
   return issues.map((i) => ({ path: prefix ? (i.path ? `${prefix}.${i.path}` : prefix) : i.path, message: i.message }));
+}
+
+/** A stored design, parsed once; `result` is solved on first read and then kept. */
+export type SolvedDesign = {
+  id: string;
+  /** The stored calibration column, as read. */
+  calibration: unknown;
+  parsed: ParseDesignResult;
+  readonly result: Result | null;
+};
+
+/** Parses a stored design row; the solver runs at most once, when `result` is first read. */
+export function solvedRow(row: { id: string; design: unknown; calibration: unknown }, solver: (d: DesignSI) => Result = solve): SolvedDesign {
+  const parsed = parseDesign(row.design);
+  let result: Result | null | undefined;
+  return {
+    id: row.id,
+    calibration: row.calibration,
+    parsed,
+    get result() {
+      if (result === undefined) result = parsed.ok ? solver(parsed.design) : null;
+      return result;
+    },
+  };
+}
+
+/** The parsed design and its result; a saved design that no longer parses is the validation error naming its fields. */
+export function requireSolved(d: SolvedDesign): { design: DesignSI; result: Result } {
+  const { parsed, result } = d;
+  if (!parsed.ok || !result) {
+    throw new ApiError('validation_failed', 'The saved design has invalid fields; fix it in the designer first.', parsed.ok ? [] : prefixIssues(parsed.issues, 'design'));
+  }
+  return { design: parsed.design, result };
 }

@@ -1,10 +1,8 @@
 import type { SessionUser } from '../session';
-import { ApiError, parseQuery } from '../http';
+import { parseQuery } from '../http';
 import { authorize } from './access';
 import { measurementRows } from './measurements';
-import { prefixIssues } from './solve';
-import { parseDesign } from '../../lib/design';
-import { solve } from '../../solver';
+import { requireSolved, solvedRow, type SolvedDesign } from './solve';
 import { readCalibration } from '../../lib/buildsheet';
 import { troubleshootQuerySchema, type TroubleshootQuery, type TroubleshootResponse } from '../../lib/api/contracts';
 import { QUESTIONS, SYMPTOMS, SYMPTOM_LABELS, benchValues, diagnose, type Answers, type QuestionId, type Symptom } from '../../lib/troubleshoot';
@@ -16,21 +14,25 @@ export function parseTroubleshootQuery(url: URL): TroubleshootQuery {
 /** The guided check for one symptom (or all four), against the design, its bench log and the answers given. */
 export async function troubleshootDesign(u: SessionUser | null, designId: string, q: TroubleshootQuery): Promise<TroubleshootResponse> {
   const { row } = await authorize(designId, u, 'read');
-  const parsed = parseDesign(row.design);
-  if (!parsed.ok) throw new ApiError('validation_failed', 'The saved design has invalid fields; fix it in the designer first.', prefixIssues(parsed.issues, 'design'));
+  return troubleshootOf(solvedRow(row), q);
+}
+
+/** The guided check of a design already authorized, from its solved result. */
+export async function troubleshootOf(d: SolvedDesign, q: TroubleshootQuery): Promise<TroubleshootResponse> {
+  const { design, result } = requireSolved(d);
   const answers: Answers = {};
   for (const id of Object.keys(QUESTIONS) as QuestionId[]) {
     const a = q[id];
     if (a === 'yes') answers[id] = true;
     else if (a === 'no') answers[id] = false;
   }
-  const rows = await measurementRows(designId);
+  const rows = await measurementRows(d.id);
   const ctx = {
-    design: parsed.design,
-    result: solve(parsed.design),
+    design,
+    result,
     bench: benchValues(rows.map((r) => ({ kind: r.kind, value: r.value, measuredAt: r.measuredAt }))),
     answers,
-    calibration: readCalibration(row.calibration),
+    calibration: readCalibration(d.calibration),
   };
   const list: Symptom[] = q.symptom ? [q.symptom] : [...SYMPTOMS];
   return {

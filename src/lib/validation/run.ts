@@ -1,4 +1,4 @@
-import type { ReferenceCase, ReferenceKind } from '../../lib/validation/cases';
+import type { ReferenceCase, ReferenceKind } from './cases';
 
 /** One reference check as the validation page shows it: the case, computed now, and its verdict. */
 export interface CheckRow {

@@ -1,5 +1,5 @@
-import { formatSi, formatSignificant } from '../../lib/format';
-import type { ReferenceKind } from '../../lib/validation/cases';
+import { formatSi, formatSignificant } from '../format';
+import type { ReferenceKind } from './cases';
 
 const PREFIX_EXPONENT: Record<string, number> = { p: -12, n: -9, µ: -6, u: -6, m: -3, '': 0, k: 3, M: 6, G: 9 };
 // longest first, so "Hz" is not read as a prefixed "z"

@@ -1,9 +1,12 @@
-import type { SessionUser } from '../lib/api/contracts/me';
+import type { SiteRole } from '../permissions';
 
 export type NavLink = { href: string; label: string };
 
+/** What the navigation needs to know of the signed-in user: only the site role. */
+export type NavUser = { role: SiteRole };
+
 /** The main navigation, in one list so the wide and the narrow menu never drift apart. */
-export function navLinks(user: SessionUser | null): NavLink[] {
+export function navLinks(user: NavUser | null): NavLink[] {
   const links: NavLink[] = [
     { href: '/designs', label: 'Designs' },
     { href: '/designs/new', label: 'New design' },
