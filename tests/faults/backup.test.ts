@@ -6,7 +6,8 @@ import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 import { startServer, type TestServer } from '../helpers/server';
 import { Client } from '../helpers/client';
-import { createDesign, signedUp, toroidCoil } from '../api/designs-fixtures';
+import { toroidCoil } from '../api/designs-fixtures';
+import { createDesign, signUp as signedUp } from '../helpers/accounts';
 
 const root = resolve(import.meta.dirname, '../..');
 const cleanup: Array<() => Promise<void> | void> = [];

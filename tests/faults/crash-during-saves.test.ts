@@ -3,7 +3,8 @@ import { createClient } from '@libsql/client';
 import { join } from 'node:path';
 import { startServer, type TestServer } from '../helpers/server';
 import { Client } from '../helpers/client';
-import { createDesign, signedUp, toroidCoil } from '../api/designs-fixtures';
+import { toroidCoil } from '../api/designs-fixtures';
+import { createDesign, signUp as signedUp } from '../helpers/accounts';
 
 type Ack = { revision: number; turns: number; name: string };
 

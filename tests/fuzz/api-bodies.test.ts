@@ -5,7 +5,8 @@ import { createHash } from 'node:crypto';
 import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative, resolve, sep } from 'node:path';
 import { startServer, type TestServer } from '../helpers/server';
-import { createDesign, signedUp, toroidCoil } from '../api/designs-fixtures';
+import { toroidCoil } from '../api/designs-fixtures';
+import { createDesign, signUp as signedUp } from '../helpers/accounts';
 import type { Client } from '../helpers/client';
 
 /**

@@ -4,7 +4,8 @@ import { createHash } from 'node:crypto';
 import { join } from 'node:path';
 import { startServer, type TestServer } from '../helpers/server';
 import { Client } from '../helpers/client';
-import { createDesign, signedUp, toroidCoil, uniqueEmail } from '../api/designs-fixtures';
+import { toroidCoil } from '../api/designs-fixtures';
+import { createDesign, signUp as signedUp, uniqueEmail } from '../helpers/accounts';
 
 function wrongSignIn(base: string, email: string, headers: Record<string, string> = {}) {
   return fetch(`${base}/api/auth/sign-in/email`, {

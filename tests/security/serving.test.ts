@@ -2,7 +2,8 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { brotliDecompressSync, gunzipSync } from 'node:zlib';
 import { request } from 'node:http';
 import { startServer, type TestServer } from '../helpers/server';
-import { signedUp, toroidCoil } from '../api/designs-fixtures';
+import { toroidCoil } from '../api/designs-fixtures';
+import { signUp as signedUp } from '../helpers/accounts';
 
 let s: TestServer;
 beforeAll(async () => {
