@@ -3,11 +3,12 @@ import { defineConfig } from 'astro/config';
 import node from '@astrojs/node';
 import react from '@astrojs/react';
 import tailwindcss from '@tailwindcss/vite';
+import precompress from './scripts/serve/precompress.mjs';
 
 export default defineConfig({
   output: 'server',
   adapter: node({ mode: 'standalone' }),
-  integrations: [react()],
+  integrations: [react(), precompress()],
   security: { checkOrigin: false },
   vite: {
     plugins: [tailwindcss()],

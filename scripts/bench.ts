@@ -83,6 +83,11 @@ for (const s of sections) {
   console.log(`${s.name}\n  median ${r.median.toFixed(3)} ms, min ${r.min.toFixed(3)} ms (target ${s.target}, ${s.repeats} runs)`);
 }
 
+{
+  const { runElevationBench } = await import('./bench/elevation');
+  runElevationBench();
+}
+
 // The page-weight and keystroke figures need a build to serve.
 {
   const { existsSync } = await import('node:fs');
@@ -94,4 +99,10 @@ for (const s of sections) {
   }
   const { runDesignerBench } = await import('./bench/designer');
   await runDesignerBench();
+}
+
+// Throughput of the API and pages against a bare node:http server, in the same run.
+{
+  const { runApiBench } = await import('./bench/api');
+  await runApiBench();
 }

@@ -14,6 +14,10 @@ process.chdir(root);
 process.env.ASTRO_TELEMETRY_DISABLED = '1';
 process.env.HOST ||= '127.0.0.1';
 process.env.PORT ||= '4321';
+// React and the other packages pick their production builds from this, read when they are first imported.
+process.env.NODE_ENV ||= 'production';
+// The front server below listens; the adapter's entry only hands over its request handler.
+process.env.ASTRO_NODE_AUTOSTART = 'disabled';
 
 function newestMtime(path: string): number {
   if (!existsSync(path)) return 0;
@@ -74,7 +78,10 @@ async function main() {
   process.on('SIGINT', () => void stopAll('SIGINT'));
   process.on('SIGTERM', () => void stopAll('SIGTERM'));
 
-  await import(pathToFileURL(join(distDir, 'server/entry.mjs')).href);
+  const { env } = await import('../src/server/env');
+  const { frontHandler, listen } = await import('./serve/front');
+  const entry = (await import(pathToFileURL(join(distDir, 'server/entry.mjs')).href)) as { handler: Parameters<typeof frontHandler>[0] };
+  await listen(frontHandler(entry.handler, join(distDir, 'client'), env().TRUSTED_PROXIES), env().HOST, env().PORT);
   console.log(`[start] Coilwright is serving on http://${process.env.HOST}:${process.env.PORT}`);
 }
 

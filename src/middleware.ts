@@ -1,22 +1,75 @@
 import { defineMiddleware } from 'astro:middleware';
-import { getAuth } from './server/auth';
+import { getAuth, sessionCacheMs, siteOrigins } from './server/auth';
+import { changedWithin } from './server/auth/freshness';
 import { dbReady } from './server/db';
+import { errorResponse } from './server/http';
 import { toSessionUser } from './server/session';
+import { checkSameOrigin } from './server/security/origin';
+import { finishResponse } from './server/security/respond';
+import { cachedPage, hasSessionCookie, keepPage, sharedPageKey } from './server/security/page-cache';
+import { HTTPS_HEADER } from './server/security/forwarded';
 
-// Fills Astro.locals only; each page and endpoint guards itself.
+let origins: ReadonlySet<string> | undefined;
+
+// Fills Astro.locals (each page and endpoint guards itself), refuses cross-site writes, and finishes
+// every response: security headers, rate-limit headers, refreshed session cookies, compression.
 export const onRequest = defineMiddleware(async (context, next) => {
   context.locals.user = null;
   context.locals.session = null;
   if (context.isPrerendered) return next();
-  await dbReady();
-  try {
-    const found = await getAuth().api.getSession({ headers: context.request.headers });
-    if (found && !(found.user as { banned?: boolean }).banned) {
-      context.locals.user = toSessionUser(found.user as Record<string, unknown>);
-      context.locals.session = { id: found.session.id, expiresAt: new Date(found.session.expiresAt) };
+  const { request, url } = context;
+  const https = url.protocol === 'https:' || request.headers.get(HTTPS_HEADER) === '1';
+
+  // better-auth checks the origin of its own routes.
+  if (!url.pathname.startsWith('/api/auth/')) {
+    origins ??= siteOrigins();
+    const verdict = checkSameOrigin(request.method, request.headers, origins);
+    if (!verdict.ok) {
+      const refused = url.pathname.startsWith('/api/')
+        ? errorResponse('forbidden', 'Requests that change data must come from this site’s own pages.')
+        : new Response('Requests that change data must come from this site’s own pages.', { status: 403, headers: { 'content-type': 'text/plain; charset=utf-8' } });
+      return finishResponse(request, refused, { https, csp: !import.meta.env.DEV });
     }
-  } catch (e) {
-    console.error('[session]', e);
   }
-  return next();
+
+  const cacheKey = sharedPageKey(request, url);
+  if (cacheKey) {
+    const hit = cachedPage(cacheKey);
+    if (hit) return hit;
+  }
+
+  await dbReady();
+  let setCookies: string[] = [];
+  // Without a session cookie there is no session to find: skip better-auth's lookup altogether.
+  if (hasSessionCookie(request)) {
+    try {
+      const auth = getAuth();
+      let { headers, response: found } = await auth.api.getSession({ headers: request.headers, returnHeaders: true });
+      if (found && changedWithin(found.user.id, sessionCacheMs())) {
+        // The cached copy may predate the change: ask the database (this also rewrites the cookie).
+        ({ headers, response: found } = await auth.api.getSession({ headers: request.headers, returnHeaders: true, query: { disableCookieCache: true } }));
+      }
+      setCookies = headers.getSetCookie();
+      if (found && !(found.user as { banned?: boolean }).banned) {
+        context.locals.user = toSessionUser(found.user as Record<string, unknown>);
+        context.locals.session = { id: found.session.id, expiresAt: new Date(found.session.expiresAt) };
+      }
+    } catch (e) {
+      console.error('[session]', e);
+    }
+  }
+  let response = await next();
+  // A path under /api/ that matches no endpoint gets the contract's JSON error, not the HTML 404 page.
+  if (response.status === 404 && url.pathname.startsWith('/api/') && (response.headers.get('content-type') ?? '').startsWith('text/html')) {
+    response = errorResponse('not_found', 'There is no such API endpoint.');
+  }
+  // A route that set the session cookie itself (sign-in, sign-out) has the last word on it.
+  const own = response.headers.getSetCookie().some((c) => /better-auth\.session_/.test(c));
+  const finished = await finishResponse(request, response, {
+    https,
+    csp: !import.meta.env.DEV,
+    extraHeaders: context.locals.rateLimit,
+    setCookies: own ? [] : setCookies,
+  });
+  return cacheKey && !context.locals.user ? keepPage(cacheKey, finished) : finished;
 });

@@ -25,6 +25,14 @@ const schema = z.object({
   // Requests per minute and client; the tests raise the sign-in limit.
   COILWRIGHT_AUTH_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
   COILWRIGHT_SOLVE_RATE_LIMIT: z.coerce.number().int().min(1).default(120),
+  // Failed sign-ins per account within 15 minutes; seconds the signed session cookie copy is trusted.
+  COILWRIGHT_ACCOUNT_SIGN_IN_LIMIT: z.coerce.number().int().min(1).default(10),
+  COILWRIGHT_SESSION_CACHE_SECONDS: z.coerce.number().int().min(1).max(3600).default(60),
+  /** Reverse proxies whose X-Forwarded-For / X-Forwarded-Proto are believed: addresses or CIDR ranges, comma-separated. */
+  TRUSTED_PROXIES: z
+    .string()
+    .optional()
+    .refine((v) => v === undefined || v.split(',').every((x) => x.trim() === '' || /^[0-9a-fA-F:.]+(\/\d{1,3})?$/.test(x.trim())), 'must list IP addresses or CIDR ranges, comma-separated'),
 });
 
 export type Env = z.infer<typeof schema> & { BETTER_AUTH_SECRET: string; BETTER_AUTH_URL: string };

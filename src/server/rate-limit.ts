@@ -1,14 +1,33 @@
-// A fixed-window counter per client and bucket, in memory (one process).
-const windows = new Map<string, { start: number; count: number }>();
+import { SlidingWindowLimiter, rateLimitHeaders, type LimitDecision } from './security/limiter';
+
+// One sliding-window limiter per bucket and limit, in memory (one process), each holding at most 50 000 clients.
+const limiters = new Map<string, SlidingWindowLimiter>();
+
+function limiterFor(bucket: string, max: number, windowMs: number): SlidingWindowLimiter {
+  const id = `${bucket}:${max}:${windowMs}`;
+  let l = limiters.get(id);
+  if (!l) {
+    l = new SlidingWindowLimiter(max, windowMs);
+    limiters.set(id, l);
+  }
+  return l;
+}
+
+/** Counts one request of `client` in `bucket`; the decision carries what the RateLimit headers report. */
+export function take(bucket: string, client: string, max: number, windowMs = 60_000, now = Date.now()): LimitDecision {
+  return limiterFor(bucket, max, windowMs).take(client, now);
+}
 
 export function allow(bucket: string, client: string, max: number, windowMs = 60_000, now = Date.now()): boolean {
-  const key = `${bucket}:${client}`;
-  const w = windows.get(key);
-  if (!w || now - w.start >= windowMs) {
-    if (windows.size > 10_000) windows.clear();
-    windows.set(key, { start: now, count: 1 });
-    return true;
-  }
-  w.count += 1;
-  return w.count <= max;
+  return take(bucket, client, max, windowMs, now).allowed;
+}
+
+/**
+ * Counts the request and remembers the decision in `locals`, so the middleware sends `RateLimit`,
+ * `RateLimit-Policy` (and `Retry-After` when refused) with the response, error or not.
+ */
+export function limitRequest(locals: App.Locals, bucket: string, client: string, max: number, windowMs = 60_000): boolean {
+  const d = take(bucket, client, max, windowMs);
+  locals.rateLimit = rateLimitHeaders(d, bucket);
+  return d.allowed;
 }

@@ -4,7 +4,21 @@ import { createServer } from 'node:net';
 import { tmpdir } from 'node:os';
 import { join, resolve } from 'node:path';
 
-export type TestServer = { url: string; dataDir: string; stop: () => Promise<void>; output: () => string };
+export type TestServer = {
+  url: string;
+  dataDir: string;
+  stop: () => Promise<void>;
+  /** SIGKILL to the server and everything it started, as a power cut would; the data folder is kept. */
+  kill: () => Promise<void>;
+  output: () => string;
+};
+
+export type StartOptions = {
+  /** Reuse this data folder (and its database) instead of a fresh one, e.g. to restart after a kill. */
+  dataDir?: string;
+  /** Leave the data folder in place on stop. */
+  keepData?: boolean;
+};
 
 export async function freePort(): Promise<number> {
   return new Promise((ok, fail) => {
@@ -19,9 +33,9 @@ export async function freePort(): Promise<number> {
 }
 
 /** Starts the built app through the real start script, on a free port with a fresh file database. */
-export async function startServer(extraEnv: Record<string, string> = {}): Promise<TestServer> {
+export async function startServer(extraEnv: Record<string, string> = {}, opts: StartOptions = {}): Promise<TestServer> {
   const root = resolve(import.meta.dirname, '../..');
-  const dataDir = mkdtempSync(join(tmpdir(), 'coilwright-test-'));
+  const dataDir = opts.dataDir ?? mkdtempSync(join(tmpdir(), 'coilwright-test-'));
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
   let log = '';
@@ -63,8 +77,18 @@ export async function startServer(extraEnv: Record<string, string> = {}): Promis
     url,
     dataDir,
     output: () => log,
+    kill: async () => {
+      if (child.exitCode !== null || child.signalCode !== null) return;
+      const exited = new Promise((r) => child.once('exit', r));
+      try {
+        process.kill(-child.pid!, 'SIGKILL');
+      } catch {
+        /* already gone */
+      }
+      await exited;
+    },
     stop: async () => {
-      if (child.exitCode === null) {
+      if (child.exitCode === null && child.signalCode === null) {
         const exited = new Promise((r) => child.once('exit', r));
         try {
           process.kill(-child.pid!, 'SIGTERM');
@@ -74,7 +98,7 @@ export async function startServer(extraEnv: Record<string, string> = {}): Promis
         await Promise.race([exited, new Promise((r) => setTimeout(r, 5000))]);
         if (child.exitCode === null) process.kill(-child.pid!, 'SIGKILL');
       }
-      rmSync(dataDir, { recursive: true, force: true });
+      if (!opts.keepData) rmSync(dataDir, { recursive: true, force: true });
     },
   };
 }

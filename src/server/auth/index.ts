@@ -6,8 +6,13 @@ import { schema, type Db } from '../db/client';
 import { getDb } from '../db';
 import { env, isLoopbackHost } from '../env';
 import { actionMail, sendMail, type OutgoingMail } from '../mail';
+import { signInGuard } from './sign-in-guard';
+import { markUserChanged } from './freshness';
 
 export const CLIENT_IP_HEADER = 'x-coilwright-client-ip';
+
+/** Default lifetime of the signed session cookie cache, in seconds. */
+export const SESSION_CACHE_SECONDS = 60;
 
 export type AuthOptions = {
   db: Db;
@@ -16,11 +21,17 @@ export type AuthOptions = {
   trustedOrigins: string[];
   send: (mail: OutgoingMail) => Promise<void>;
   signInLimit?: number;
+  /** Failed sign-ins per account within 15 minutes before that account's sign-in is refused for a while. */
+  accountSignInLimit?: number;
+  /** Seconds a signed session cookie is trusted before the database is asked again (revocation takes effect within it). */
+  sessionCacheSeconds?: number;
 };
 
 /** Built through a factory so tests can hand it their own database and mail sink. */
 export function createAuth(o: AuthOptions) {
   const limit = o.signInLimit ?? 10;
+  const guard = signInGuard(o.accountSignInLimit ?? 10);
+  const https = new URL(o.baseURL).protocol === 'https:';
   return betterAuth({
     appName: 'Coilwright',
     baseURL: o.baseURL,
@@ -63,6 +74,19 @@ export function createAuth(o: AuthOptions) {
         );
       },
     },
+    session: {
+      // A signed copy of the session in a cookie spares the database lookup on each request; a signed-out
+      // or disabled session stops working when this copy expires.
+      cookieCache: { enabled: true, maxAge: o.sessionCacheSeconds ?? SESSION_CACHE_SECONDS },
+    },
+    hooks: { before: guard.before, after: guard.after },
+    databaseHooks: {
+      user: { update: { after: async (u) => markUserChanged(u.id) } },
+      session: {
+        update: { after: async (x) => void (x.userId && markUserChanged(x.userId)) },
+        delete: { after: async (x) => void (x.userId && markUserChanged(x.userId)) },
+      },
+    },
     plugins: [admin({ ac, roles: siteRoles, defaultRole: 'member', adminRoles: ['admin'] })],
     rateLimit: {
       enabled: true,
@@ -78,6 +102,8 @@ export function createAuth(o: AuthOptions) {
       // Never relaxed by the environment (test runners set TEST=true, which would otherwise skip it).
       disableOriginCheck: false,
       ipAddress: { ipAddressHeaders: [CLIENT_IP_HEADER] },
+      // Secure (and __Secure- prefixed) cookies whenever the site is served over HTTPS.
+      useSecureCookies: https,
     },
     telemetry: { enabled: false },
   });
@@ -85,7 +111,20 @@ export function createAuth(o: AuthOptions) {
 
 export type Auth = ReturnType<typeof createAuth>;
 
-function trustedOriginsFor(baseURL: string, host: string, port: number): string[] {
+export { markUserChanged } from './freshness';
+
+/** The cookie cache lifetime in effect, in milliseconds. */
+export function sessionCacheMs(): number {
+  return env().COILWRIGHT_SESSION_CACHE_SECONDS * 1000;
+}
+
+/** Origins a browser request to this site may carry: the public URL, and both loopback spellings when serving on loopback. */
+export function siteOrigins(): ReadonlySet<string> {
+  const e = env();
+  return new Set(trustedOriginsFor(e.BETTER_AUTH_URL, e.HOST, e.PORT));
+}
+
+export function trustedOriginsFor(baseURL: string, host: string, port: number): string[] {
   const origins = new Set([new URL(baseURL).origin]);
   if (isLoopbackHost(host)) {
     origins.add(`http://localhost:${port}`);
@@ -106,6 +145,8 @@ export function getAuth(): Auth {
       trustedOrigins: trustedOriginsFor(e.BETTER_AUTH_URL, e.HOST, e.PORT),
       send: sendMail,
       signInLimit: e.COILWRIGHT_AUTH_RATE_LIMIT,
+      accountSignInLimit: e.COILWRIGHT_ACCOUNT_SIGN_IN_LIMIT,
+      sessionCacheSeconds: e.COILWRIGHT_SESSION_CACHE_SECONDS,
     });
   }
   return g.__coilwrightAuth;

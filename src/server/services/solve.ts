@@ -23,9 +23,23 @@ export function solveInput(input: unknown): { input: DesignInput; result: Result
 
 /** Solves a stored design; a design saved before a schema change still answers, with its result null. */
 export function solveStored(input: unknown): Result | null {
+  // The solver is deterministic: a stored design (saved once, read many times) is parsed and solved once per
+  // process; the 256 most recently read are kept. Callers only serialise the result, never change it.
+  const key = JSON.stringify(input);
+  const hit = storedResults.get(key);
+  if (hit !== undefined) {
+    storedResults.delete(key);
+    storedResults.set(key, hit);
+    return hit;
+  }
   const parsed = parseDesign(input);
-  return parsed.ok ? solve(parsed.design) : null;
+  const result = parsed.ok ? solve(parsed.design) : null;
+  storedResults.set(key, result);
+  if (storedResults.size > 256) storedResults.delete(storedResults.keys().next().value as string);
+  return result;
 }
+
+const storedResults = new Map<string, Result | null>();
 
 /** The key figures stored with each revision. */
 export function resultSummary(result: Result | null): ResultSummary | null {
