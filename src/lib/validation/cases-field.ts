@@ -170,7 +170,8 @@ export const fieldCases: ReferenceCase[] = [
         { sections: 4, windingPanels: 16, toploadPanels: 24 },
       ).toploadAlone * 1e12,
   }),
-  ...medhurstRows.map((row) =>
+  // Three of the five rows (short, middle, long) keep this table to three checks; the suite compares all five.
+  ...medhurstRows.filter((row) => [1, 3, 5].includes(row.lengthOverDiameter)).map((row) =>
     defineCase({
       id: `field-medhurst-ld-${row.lengthOverDiameter}`,
       quantity: `Self-capacitance of an isolated coil on a polystyrene rod, ℓ/D = ${row.lengthOverDiameter}`,
