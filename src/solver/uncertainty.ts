@@ -97,9 +97,7 @@ function fieldContributions(d: DesignSI, base: UncertaintyBase, field: FieldUnce
   const lHigh = spaceWound ? UNCERTAINTY_SOURCES.inductanceSpaceWoundHigh : UNCERTAINTY_SOURCES.inductanceCloseWound;
   add(
     'inductance',
-    spaceWound
-      ? 'Secondary inductance −0.5 %/+5 %: space-wound coils measure above the current-sheet value (builders\' reports, Tesla Coil Mailing List, 1999)'
-      : 'Secondary inductance ±0.5 %: current sheet with Rosa corrections, helicity neglected (from memory)',
+    inductanceSource(spaceWound),
     nominal / Math.sqrt(1 + lHigh),
     nominal / Math.sqrt(1 - lLow),
   );
@@ -155,9 +153,7 @@ function lumpedContributions(
   const lHigh = spaceWound ? UNCERTAINTY_SOURCES.inductanceSpaceWoundHigh : UNCERTAINTY_SOURCES.inductanceCloseWound;
   add(
     'inductance',
-    spaceWound
-      ? 'Secondary inductance −0.5 %/+5 %: space-wound coils measure above the current-sheet value (builders\' reports, Tesla Coil Mailing List, 1999)'
-      : 'Secondary inductance ±0.5 %: current sheet with Rosa corrections, helicity neglected (from memory)',
+    inductanceSource(spaceWound),
     f(base.inductance * (1 - lLow), base.selfCapacitance, base.toploadCapacitance, base.streamerCapacitance),
     f(base.inductance * (1 + lHigh), base.selfCapacitance, base.toploadCapacitance, base.streamerCapacitance),
   );
@@ -220,4 +216,11 @@ function combine(d: DesignSI, base: UncertaintyBase, nominal: number, contributi
 
 function pct(x: number): string {
   return `${Number((x * 100).toFixed(1))} %`;
+}
+
+/** The inductance line of the band and its source, by how the secondary is wound. */
+function inductanceSource(spaceWound: boolean): string {
+  return spaceWound
+    ? 'Secondary inductance −0.5 %/+5 %: space-wound coils measure above the current-sheet value (builders\' reports, Tesla Coil Mailing List, 1999)'
+    : 'Secondary inductance ±0.5 %: current sheet with Rosa corrections, helicity neglected (from memory)';
 }
