@@ -7,7 +7,7 @@ import precompress from './scripts/serve/precompress.mjs';
 
 export default defineConfig({
   output: 'server',
-  adapter: node({ mode: 'standalone' }),
+  adapter: node({ mode: 'middleware' }),
   integrations: [react(), precompress()],
   security: { checkOrigin: false },
   vite: {

@@ -80,7 +80,16 @@ async function main() {
 
   const { env } = await import('../src/server/env');
   const { frontHandler, listen } = await import('./serve/front');
-  const entry = (await import(pathToFileURL(join(distDir, 'server/entry.mjs')).href)) as { handler: Parameters<typeof frontHandler>[0] };
+  const entry = (await import(pathToFileURL(join(distDir, 'server/entry.mjs')).href)) as {
+    handler: Parameters<typeof frontHandler>[0];
+    pageMap?: Map<string, () => Promise<unknown>>;
+  };
+  // The adapter imports a route's module on every request; under the TypeScript loader each import() is a
+  // round trip to the loader's thread. Each module is loaded once, so keep the first promise.
+  for (const [route, load] of entry.pageMap ?? []) {
+    let loaded: Promise<unknown> | undefined;
+    entry.pageMap!.set(route, () => (loaded ??= load()));
+  }
   await listen(frontHandler(entry.handler, join(distDir, 'client'), env().TRUSTED_PROXIES), env().HOST, env().PORT);
   console.log(`[start] Coilwright is serving on http://${process.env.HOST}:${process.env.PORT}`);
 }

@@ -1,6 +1,7 @@
 import { defineMiddleware } from 'astro:middleware';
 import { getAuth, sessionCacheMs, siteOrigins } from './server/auth';
 import { changedWithin } from './server/auth/freshness';
+import { recallSession, rememberSession, sessionCookieKey } from './server/auth/session-memo';
 import { dbReady } from './server/db';
 import { errorResponse } from './server/http';
 import { toSessionUser } from './server/session';
@@ -41,7 +42,12 @@ export const onRequest = defineMiddleware(async (context, next) => {
   await dbReady();
   let setCookies: string[] = [];
   // Without a session cookie there is no session to find: skip better-auth's lookup altogether.
-  if (hasSessionCookie(request)) {
+  const memoKey = hasSessionCookie(request) ? sessionCookieKey(request.headers.get('cookie')) : '';
+  const recalled = memoKey ? recallSession(memoKey) : null;
+  if (recalled && !changedWithin(recalled.user.id, sessionCacheMs())) {
+    context.locals.user = recalled.user;
+    context.locals.session = recalled.session;
+  } else if (memoKey) {
     try {
       const auth = getAuth();
       let { headers, response: found } = await auth.api.getSession({ headers: request.headers, returnHeaders: true });
@@ -53,6 +59,8 @@ export const onRequest = defineMiddleware(async (context, next) => {
       if (found && !(found.user as { banned?: boolean }).banned) {
         context.locals.user = toSessionUser(found.user as Record<string, unknown>);
         context.locals.session = { id: found.session.id, expiresAt: new Date(found.session.expiresAt) };
+        // Only a lookup that left the cookies as they were is remembered: a refreshed cookie goes out once.
+        if (setCookies.length === 0) rememberSession(memoKey, { user: context.locals.user, session: context.locals.session });
       }
     } catch (e) {
       console.error('[session]', e);

@@ -2,7 +2,8 @@
  * The server `npm start` listens with, in front of the Astro Node handler:
  * - the client's address: X-Forwarded-For (and -Proto) count only from TRUSTED_PROXIES; otherwise they
  *   are replaced by the socket's peer address, so a client cannot choose its own rate-limit key;
- * - static files of dist/client: the .br / .gz sibling written at build when the client accepts it,
+ * - every static file of dist/client (the adapter runs in middleware mode and serves none itself): the
+ *   .br / .gz sibling written at build when the client accepts it,
  *   long-lived immutable caching for the fingerprinted /_astro/* files;
  * - the security headers on every response, static files included (rendered responses get theirs,
  *   with the page's CSP, from the middleware).
@@ -30,6 +31,13 @@ const TYPES: Record<string, string> = {
   '.xml': 'application/xml',
   '.webmanifest': 'application/manifest+json',
   '.map': 'application/json; charset=utf-8',
+  '.woff2': 'font/woff2',
+  '.woff': 'font/woff',
+  '.png': 'image/png',
+  '.jpg': 'image/jpeg',
+  '.jpeg': 'image/jpeg',
+  '.webp': 'image/webp',
+  '.ico': 'image/x-icon',
 };
 
 type StaticFile = { path: string; type: string; size: number; etag: string; br?: string; gz?: string; csp: string };
@@ -43,8 +51,7 @@ export function indexClientDir(clientDir: string): Map<string, StaticFile> {
       if (e.isDirectory()) walk(p);
       else if (!p.endsWith('.br') && !p.endsWith('.gz')) {
         const ext = extname(p);
-        const type = TYPES[ext];
-        if (!type) continue; // fonts, images: the adapter's own static handler serves them
+        const type = TYPES[ext] ?? 'application/octet-stream';
         const st = statSync(p);
         const url = '/' + relative(clientDir, p).split(sep).join('/');
         const has = (s: string) => {
@@ -68,11 +75,11 @@ export function indexClientDir(clientDir: string): Map<string, StaticFile> {
   return files;
 }
 
-function sendCompressed(req: IncomingMessage, res: ServerResponse, f: StaticFile, encoding: 'br' | 'gzip', body: Buffer, url: string) {
+function sendFile(req: IncomingMessage, res: ServerResponse, f: StaticFile, encoding: 'br' | 'gzip' | null, body: Buffer, url: string) {
   res.setHeader('Content-Type', f.type);
-  res.setHeader('Content-Encoding', encoding);
-  res.setHeader('Vary', 'Accept-Encoding');
-  res.setHeader('ETag', `${f.etag.slice(0, -1)}-${encoding}"`);
+  if (encoding) res.setHeader('Content-Encoding', encoding);
+  if (encoding || f.br || f.gz) res.setHeader('Vary', 'Accept-Encoding');
+  res.setHeader('ETag', encoding ? `${f.etag.slice(0, -1)}-${encoding}"` : f.etag);
   res.setHeader('Cache-Control', url.startsWith('/_astro/') ? 'public, max-age=31536000, immutable' : 'public, max-age=0, must-revalidate');
   if (req.headers['if-none-match'] === res.getHeader('ETag')) {
     res.statusCode = 304;
@@ -135,11 +142,9 @@ export function frontHandler(app: Handler, clientDir: string, trustedSpec: strin
         const enc = pickEncoding(accept);
         const choice: ['br' | 'gzip', string] | null =
           enc === 'br' && f.br ? ['br', f.br] : enc && f.gz && acceptsEncoding(accept, 'gzip') ? ['gzip', f.gz] : null;
-        if (choice) {
-          sendCompressed(req, res, f, choice[0], read(choice[1]), path);
-          return;
-        }
-        if (f.br || f.gz) res.setHeader('Vary', 'Accept-Encoding');
+        if (choice) sendFile(req, res, f, choice[0], read(choice[1]), path);
+        else sendFile(req, res, f, null, read(f.path), path);
+        return;
       }
     }
     app(req, res);

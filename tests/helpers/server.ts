@@ -18,6 +18,8 @@ export type StartOptions = {
   dataDir?: string;
   /** Leave the data folder in place on stop. */
   keepData?: boolean;
+  /** Node.js flags for the server process itself (e.g. --cpu-prof when profiling a bench); tsx then loads in-process */
+  nodeArgs?: string[];
 };
 
 export async function freePort(): Promise<number> {
@@ -39,7 +41,7 @@ export async function startServer(extraEnv: Record<string, string> = {}, opts: S
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
   let log = '';
-  const child: ChildProcess = spawn(process.execPath, [join(root, 'node_modules/tsx/dist/cli.mjs'), join(root, 'scripts/start.ts')], {
+  const child: ChildProcess = spawn(process.execPath, [...(opts.nodeArgs ? [...opts.nodeArgs, '--import', 'tsx'] : [join(root, 'node_modules/tsx/dist/cli.mjs')]), join(root, 'scripts/start.ts')], {
     cwd: root,
     env: {
       ...process.env,

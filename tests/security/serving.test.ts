@@ -27,6 +27,26 @@ function rawGet(path: string, headers: Record<string, string> = {}, method = 'GE
 }
 
 describe('npm start serving', () => {
+  it('serves every built static file itself: fonts and images with their type, a year-long cache for fingerprinted ones, 304 on a matching ETag', async () => {
+    const page = (await rawGet('/')).body.toString('utf8');
+    const css = page.match(/\/_astro\/[^"']+\.css/)?.[0];
+    expect(css).toBeTruthy();
+    const sheet = (await rawGet(css!)).body.toString('utf8');
+    const font = sheet.match(/\/_astro\/[^)"']+\.woff2/)?.[0];
+    expect(font).toBeTruthy();
+    const f = await rawGet(font!);
+    expect(f.status).toBe(200);
+    expect(f.headers['content-type']).toBe('font/woff2');
+    expect(f.headers['cache-control']).toContain('immutable');
+    expect(f.body.byteLength).toBe(Number(f.headers['content-length']));
+    expect((await rawGet(font!, { 'if-none-match': String(f.headers.etag) })).status).toBe(304);
+    const icon = await rawGet('/favicon.svg');
+    expect(icon.status).toBe(200);
+    expect(icon.headers['content-type']).toBe('image/svg+xml');
+    expect(icon.headers['x-content-type-options']).toBe('nosniff');
+    expect((await rawGet('/no-such-file.woff2')).status).toBe(404);
+  });
+
   it('sends pages brotli- or gzip-compressed by what the client accepts, and plain to one that accepts neither', async () => {
     const br = await rawGet('/methods', { 'accept-encoding': 'gzip, deflate, br' });
     expect(br.status).toBe(200);
