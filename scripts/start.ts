@@ -86,9 +86,19 @@ async function main() {
   };
   // The adapter imports a route's module on every request; under the TypeScript loader each import() is a
   // round trip to the loader's thread. Each module is loaded once, so keep the first promise.
-  for (const [route, load] of entry.pageMap ?? []) {
+  const once = (load: () => Promise<unknown>) => {
     let loaded: Promise<unknown> | undefined;
-    entry.pageMap!.set(route, () => (loaded ??= load()));
+    return () => (loaded ??= load());
+  };
+  for (const [route, load] of entry.pageMap ?? []) entry.pageMap!.set(route, once(load));
+  // The same for the actions and middleware loaders the entry put on its manifest (one module, shared).
+  const manifestFile = readdirSync(join(distDir, 'server')).find((f) => /^manifest_.*\.mjs$/.test(f));
+  if (manifestFile) {
+    const { manifest } = (await import(pathToFileURL(join(distDir, 'server', manifestFile)).href)) as { manifest?: Record<string, unknown> };
+    for (const key of ['actions', 'middleware'] as const) {
+      const load = manifest?.[key];
+      if (typeof load === 'function') manifest![key] = once(load as () => Promise<unknown>);
+    }
   }
   await listen(frontHandler(entry.handler, join(distDir, 'client'), env().TRUSTED_PROXIES), env().HOST, env().PORT);
   console.log(`[start] Coilwright is serving on http://${process.env.HOST}:${process.env.PORT}`);
