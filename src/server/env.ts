@@ -25,6 +25,8 @@ const schema = z.object({
   // Requests per minute and client; the tests raise the sign-in limit.
   COILWRIGHT_AUTH_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
   COILWRIGHT_SOLVE_RATE_LIMIT: z.coerce.number().int().min(1).default(120),
+  // Invitation mails per minute and account: a short burst is fine, a flood is not.
+  COILWRIGHT_INVITE_RATE_LIMIT: z.coerce.number().int().min(1).default(20),
   // Failed sign-ins per account within 15 minutes; seconds the signed session cookie copy is trusted.
   COILWRIGHT_ACCOUNT_SIGN_IN_LIMIT: z.coerce.number().int().min(1).default(10),
   COILWRIGHT_SESSION_CACHE_SECONDS: z.coerce.number().int().min(1).max(3600).default(60),

@@ -48,6 +48,13 @@ describe('invitations', () => {
     expect(html).toContain(`/sign-in?next=${encodeURIComponent(`/invitations/${token}`)}`);
     expect((await new Client(s.url).post(`/api/v1/invitations/${token}/accept`)).status).toBe(401);
 
+    // A forwarded link does not work for another account, and stays usable for the invited address.
+    const forwarded = await signUp(s.url, 'Forwarded Finn');
+    const refused = await forwarded.c.post(`/api/v1/invitations/${token}/accept`);
+    expect(refused.status).toBe(403);
+    expect((await refused.json()).error.message).toContain('another e-mail address');
+    expect((await forwarded.c.get(`/api/v1/designs/${id}`)).status).toBe(404);
+
     const newcomer = new Client(s.url);
     await newcomer.signUp('Newcomer Nils', to);
     expect((await newcomer.get(`/api/v1/designs/${id}`)).status).toBe(404);

@@ -77,9 +77,9 @@ describe('GET /api/v1/designs/:id/build-sheet.pdf', () => {
     }
   });
 
-  it('GET build-sheet.pdf is 404 for a stranger and for an anonymous caller', async () => {
+  it('GET build-sheet.pdf is 404 for a stranger and asks an anonymous caller to sign in', async () => {
     expect((await stranger.get(`/api/v1/designs/${id}/build-sheet.pdf`)).status).toBe(404);
-    expect((await anon.get(`/api/v1/designs/${id}/build-sheet.pdf`)).status).toBe(404);
+    expect((await anon.get(`/api/v1/designs/${id}/build-sheet.pdf`)).status).toBe(401);
   });
 });
 
@@ -118,7 +118,7 @@ describe('/api/v1/designs/:id/measurements', () => {
   it('measurements routes are 404 for a stranger (read and write) and anonymous reads', async () => {
     expect((await stranger.get(`/api/v1/designs/${id}/measurements`)).status).toBe(404);
     expect((await stranger.post(`/api/v1/designs/${id}/measurements`, { kind: 'coupling', value: 0.1, measuredAt: '2026-03-14' })).status).toBe(404);
-    expect((await anon.get(`/api/v1/designs/${id}/measurements`)).status).toBe(404);
+    expect((await anon.get(`/api/v1/designs/${id}/measurements`)).status).toBe(401);
   });
 });
 
@@ -146,7 +146,7 @@ describe('/api/v1/designs/:id/calibration', () => {
     expect(r.status).toBe(400);
     expect((await r.json()).error.issues[0].path).toBe('loadedFrequency');
     expect((await stranger.put(`/api/v1/designs/${id}/calibration`, { loadedFrequency: 1e5 })).status).toBe(404);
-    expect((await anon.get(`/api/v1/designs/${id}/calibration`)).status).toBe(404);
+    expect((await anon.get(`/api/v1/designs/${id}/calibration`)).status).toBe(401);
   });
 });
 

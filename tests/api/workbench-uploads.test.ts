@@ -90,14 +90,14 @@ describe('POST /api/v1/designs/:id/attachments', () => {
     expect((await c.json()).contentType).toBe('image/webp');
   });
 
-  it('GET /api/v1/attachments/:id and its thumbnail are 404 for a stranger and an anonymous caller', async () => {
+  it('GET /api/v1/attachments/:id and its thumbnail are 404 for a stranger and ask an anonymous caller to sign in', async () => {
     const [a] = await list(id);
-    for (const c of [stranger, anon]) {
-      expect((await c.get(`/api/v1/attachments/${a.id}`)).status).toBe(404);
-      expect((await c.get(`/api/v1/attachments/${a.id}/thumbnail`)).status).toBe(404);
+    for (const [c, status] of [[stranger, 404], [anon, 401]] as const) {
+      expect((await c.get(`/api/v1/attachments/${a.id}`)).status).toBe(status);
+      expect((await c.get(`/api/v1/attachments/${a.id}/thumbnail`)).status).toBe(status);
     }
     expect((await stranger.get(`/api/v1/designs/${id}/attachments`)).status).toBe(404);
-    expect((await anon.get(`/api/v1/designs/${id}/attachments`)).status).toBe(404);
+    expect((await anon.get(`/api/v1/designs/${id}/attachments`)).status).toBe(401);
     expect((await stranger.req('POST', `/api/v1/designs/${id}/attachments`, form(png, 'x.png', 'image/png'))).status).toBe(404);
   });
 

@@ -99,6 +99,10 @@ export async function describeInvitation(token: string): Promise<InvitationDescr
 export async function acceptInvitation(u: SessionUser, token: string): Promise<AcceptInvitationResponse> {
   const { inv, d } = await openInvitation(token);
   if (d.ownerId === u.id) throw new ApiError('conflict', 'You own this design already.');
+  // The link is for the person it was mailed to: a forwarded link cannot be used by another account.
+  if (u.email.trim().toLowerCase() !== inv.email.trim().toLowerCase()) {
+    throw new ApiError('forbidden', 'This invitation was sent to another e-mail address. Sign in with the address it was sent to, or ask the owner to invite this account.');
+  }
   const done = await database().transaction(async (tx) => {
     const claimed = await tx
       .update(designInvitations)

@@ -4,7 +4,7 @@ import { deleteAttachment, fileResponse, readAttachment } from '../../../../../s
 
 export const prerender = false;
 
-export const GET: APIRoute = handle(async ({ locals, params }) => fileResponse(await readAttachment(locals.user, params.id!, 'file'), 'file'));
+export const GET: APIRoute = handle(async ({ locals, params }) => fileResponse(await readAttachment(requireUser(locals), params.id!, 'file'), 'file'));
 
 export const DELETE: APIRoute = handle(async ({ locals, params }) => {
   const u = requireUser(locals);

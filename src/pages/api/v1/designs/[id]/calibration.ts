@@ -5,7 +5,7 @@ import { getCalibration, putCalibration } from '../../../../../server/services/m
 
 export const prerender = false;
 
-export const GET: APIRoute = handle(async ({ locals, params }) => Response.json(await getCalibration(locals.user, params.id!)));
+export const GET: APIRoute = handle(async ({ locals, params }) => Response.json(await getCalibration(requireUser(locals), params.id!)));
 
 export const PUT: APIRoute = handle(async ({ locals, params, request }) => {
   const u = requireUser(locals);

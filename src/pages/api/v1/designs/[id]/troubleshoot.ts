@@ -1,7 +1,7 @@
 import type { APIRoute } from 'astro';
-import { handle } from '../../../../../server/http';
+import { handle, requireUser } from '../../../../../server/http';
 import { parseTroubleshootQuery, troubleshootDesign } from '../../../../../server/services/troubleshoot';
 
 export const prerender = false;
 
-export const GET: APIRoute = handle(async ({ locals, params, url }) => Response.json(await troubleshootDesign(locals.user, params.id!, parseTroubleshootQuery(url))));
+export const GET: APIRoute = handle(async ({ locals, params, url }) => Response.json(await troubleshootDesign(requireUser(locals), params.id!, parseTroubleshootQuery(url))));

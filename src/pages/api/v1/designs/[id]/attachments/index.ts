@@ -4,7 +4,7 @@ import { listAttachments, uploadAttachment } from '../../../../../../server/serv
 
 export const prerender = false;
 
-export const GET: APIRoute = handle(async ({ locals, params }) => Response.json(await listAttachments(locals.user, params.id!)));
+export const GET: APIRoute = handle(async ({ locals, params }) => Response.json(await listAttachments(requireUser(locals), params.id!)));
 
 export const POST: APIRoute = handle(async ({ locals, params, request }) => {
   const u = requireUser(locals);

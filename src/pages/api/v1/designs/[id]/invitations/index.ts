@@ -2,13 +2,11 @@ import type { APIRoute } from 'astro';
 import { createInvitationBodySchema } from '../../../../../../lib/api/contracts';
 import { ApiError, handle, parseBody, requireUser } from '../../../../../../server/http';
 import { allow } from '../../../../../../server/rate-limit';
+import { env } from '../../../../../../server/env';
 import { siteOrigin } from '../../../../../../server/site-url';
 import { createInvitation, listInvitations } from '../../../../../../server/services/invitations';
 
 export const prerender = false;
-
-// Each invitation sends a mail; a short burst is fine, a flood is not.
-const PER_MINUTE = 20;
 
 export const GET: APIRoute = handle(async ({ locals, params }) => {
   const u = requireUser(locals);
@@ -17,7 +15,7 @@ export const GET: APIRoute = handle(async ({ locals, params }) => {
 
 export const POST: APIRoute = handle(async ({ locals, params, request }) => {
   const u = requireUser(locals);
-  if (!allow('invite', u.id, PER_MINUTE)) throw new ApiError('rate_limited');
+  if (!allow('invite', u.id, env().COILWRIGHT_INVITE_RATE_LIMIT)) throw new ApiError('rate_limited');
   // Links in mail use the configured site address, never the request's Host header.
   const created = await createInvitation(u, params.id!, await parseBody(request, createInvitationBodySchema), siteOrigin());
   return Response.json(created, { status: 201 });

@@ -5,7 +5,7 @@ import { createMeasurement, listMeasurements } from '../../../../../../server/se
 
 export const prerender = false;
 
-export const GET: APIRoute = handle(async ({ locals, params }) => Response.json(await listMeasurements(locals.user, params.id!)));
+export const GET: APIRoute = handle(async ({ locals, params }) => Response.json(await listMeasurements(requireUser(locals), params.id!)));
 
 export const POST: APIRoute = handle(async ({ locals, params, request }) => {
   const u = requireUser(locals);
