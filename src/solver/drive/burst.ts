@@ -133,6 +133,9 @@ export function simulateBurst(settings: DriveSettingsSI, circuit: BurstCircuitSI
   A[3 * 5 + 4] = (-M * w) / L2;
   const uOfVoltage = L2 / (det * w);
   const Phi = taylorPropagator(A, h);
+  // the fixed step's propagator and the current rows of A as locals for the inner loop
+  const [p00, p01, p02, p03, p04, p10, p11, p12, p13, p14, p20, p21, p22, p23, p24, p30, p31, p32, p33, p34] = Phi;
+  const [a20, a21, a22, a23, a24, a30, a31, a32, a33, a34] = A.subarray(10, 20);
 
   let peakI1 = 0, peakI2 = 0, peakVC1 = 0, peakVC2 = 0;
   let tripTime: number | null = null;
@@ -141,25 +144,22 @@ export function simulateBurst(settings: DriveSettingsSI, circuit: BurstCircuitSI
   // Waveform: the first sample, then per time bucket the step with the largest |i1| and the one with the largest |v_C2|.
   const wave: BurstWaveform = { time: [0], primaryCurrent: [0], secondaryVoltage: [0] };
   let bucket = 0;
-  let iT = -1, iI = 0, iV = 0;
-  let vT = -1, vI = 0, vV = 0;
+  // The bucket's candidates [t, i1, v2] of the largest |i1| and of the largest |v_C2| (t = −1: none yet),
+  // kept in a typed array so that the per-step writes allocate nothing.
+  const cand = new Float64Array([-1, 0, 0, -1, 0, 0]);
   const push = (t: number, i1: number, v2: number) => {
     wave.time.push(t);
     wave.primaryCurrent.push(i1);
     wave.secondaryVoltage.push(v2);
   };
   const flush = () => {
-    if (iT >= 0 && vT >= 0 && iT !== vT) {
-      if (iT < vT) {
-        push(iT, iI, iV);
-        push(vT, vI, vV);
-      } else {
-        push(vT, vI, vV);
-        push(iT, iI, iV);
-      }
-    } else if (iT >= 0) push(iT, iI, iV);
-    iT = -1;
-    vT = -1;
+    const iFirst = cand[0] <= cand[3] || cand[3] < 0;
+    const a = iFirst ? 0 : 3;
+    const b = iFirst ? 3 : 0;
+    if (cand[a] >= 0) push(cand[a], cand[a + 1], cand[a + 2]);
+    if (cand[b] >= 0 && cand[b] !== cand[a]) push(cand[b], cand[b + 1], cand[b + 2]);
+    cand[0] = -1;
+    cand[3] = -1;
   };
   const sample = (t: number, i1: number, v2: number) => {
     const b = Math.min(WAVEFORM_BUCKETS - 1, Math.floor((t / tEnd) * WAVEFORM_BUCKETS));
@@ -167,15 +167,15 @@ export function simulateBurst(settings: DriveSettingsSI, circuit: BurstCircuitSI
       flush();
       bucket = b;
     }
-    if (iT < 0 || Math.abs(i1) > Math.abs(iI)) {
-      iT = t;
-      iI = i1;
-      iV = v2;
+    if (cand[0] < 0 || Math.abs(i1) > Math.abs(cand[1])) {
+      cand[0] = t;
+      cand[1] = i1;
+      cand[2] = v2;
     }
-    if (vT < 0 || Math.abs(v2) > Math.abs(vV)) {
-      vT = t;
-      vI = i1;
-      vV = v2;
+    if (cand[3] < 0 || Math.abs(v2) > Math.abs(cand[5])) {
+      cand[3] = t;
+      cand[4] = i1;
+      cand[5] = v2;
     }
   };
 
@@ -198,10 +198,16 @@ export function simulateBurst(settings: DriveSettingsSI, circuit: BurstCircuitSI
     let hs = Math.min(h, tEnd - t);
     const last = tEnd - t - hs < 1e-9 * h;
     if (last) hs = tEnd - t;
-    if (hs === h) matVec(Phi, z, zn);
-    else stateAt(A, z, hs, powers, zn);
-    let rb1 = rowDot(A, 2, zn);
-    let rb2 = rowDot(A, 3, zn);
+    if (hs === h) {
+      const z0 = z[0], z1 = z[1], z2 = z[2], z3 = z[3], z4 = z[4];
+      zn[0] = p00 * z0 + p01 * z1 + p02 * z2 + p03 * z3 + p04 * z4;
+      zn[1] = p10 * z0 + p11 * z1 + p12 * z2 + p13 * z3 + p14 * z4;
+      zn[2] = p20 * z0 + p21 * z1 + p22 * z2 + p23 * z3 + p24 * z4;
+      zn[3] = p30 * z0 + p31 * z1 + p32 * z2 + p33 * z3 + p34 * z4;
+      zn[4] = z4;
+    } else stateAt(A, z, hs, powers, zn);
+    let rb1 = a20 * zn[0] + a21 * zn[1] + a22 * zn[2] + a23 * zn[3] + a24 * zn[4];
+    let rb2 = a30 * zn[0] + a31 * zn[1] + a32 * zn[2] + a33 * zn[3] + a34 * zn[4];
     let switched = false;
     const sb = dual ? zn[2] : feedbackSign * zn[3];
     if (polarity * sb < 0) {
@@ -290,12 +296,6 @@ export const BURST_MAX_STEPS = 3_000_000;
 function rowDot(A: Float64Array, row: number, z: Float64Array): number {
   const o = row * 5;
   return A[o] * z[0] + A[o + 1] * z[1] + A[o + 2] * z[2] + A[o + 3] * z[3] + A[o + 4] * z[4];
-}
-
-/** out = P z for a 5×5 P whose last row is (0 0 0 0 1). */
-function matVec(P: Float64Array, z: Float64Array, out: Float64Array): void {
-  for (let r = 0; r < 4; r++) out[r] = rowDot(P, r, z);
-  out[4] = z[4];
 }
 
 /** Σ_{k ≤ TAYLOR_ORDER} (hA)^k / k!, the fixed step's propagator. */
