@@ -83,3 +83,6 @@ export {
   type EnergyExchangeOptions,
   type EnergyExchangeSeries,
 } from './response/exchange';
+
+// Bridge-driven (solid-state) coils: the burst simulation and its goal-first inverses.
+export * from './drive';
