@@ -325,11 +325,18 @@ export async function adoptWindingSession(u: SessionUser, designId: string, sess
   if (s.status !== 'finished' || s.woundTurns === null || s.windingLength === null) throw new ApiError('conflict', 'Finish the session before adopting what was wound.');
   if (s.adoptedRevision !== null) throw new ApiError('conflict', `This session was already adopted into revision ${s.adoptedRevision}.`);
   const input = row.design as Record<string, unknown> & { secondary?: Record<string, unknown> };
-  const design = { ...input, secondary: { ...(input.secondary ?? {}), turns: s.woundTurns, windingLength: `${(s.windingLength * 1000).toFixed(1)} mm` } };
+  const { windingLength: _planned, ...secondary } = input.secondary ?? {};
+  // A measured length at or below turns × insulated diameter is a close-wound winding read a little short:
+  // it is adopted as close-wound (the solver's turns × insulated diameter), never as an impossible length.
+  const closeWound = s.windingLength <= s.woundTurns * s.insulatedDiameter * (1 + 1e-9);
+  const lengthText = `${(Math.ceil(s.windingLength * 1e5) / 100).toFixed(2)} mm`;
+  const design = { ...input, secondary: closeWound ? { ...secondary, turns: s.woundTurns } : { ...secondary, turns: s.woundTurns, windingLength: lengthText } };
   const saved = await updateDesign(u, designId, {
     design,
     revision: body?.revision ?? row.revision,
-    message: body?.message ?? `As wound: ${s.woundTurns} turns over ${(s.windingLength * 1000).toFixed(1)} mm (winding session of ${s.startedAt.toISOString().slice(0, 10)})`,
+    message:
+      body?.message ??
+      `As wound: ${s.woundTurns} turns over ${(s.windingLength * 1000).toFixed(1)} mm${closeWound ? ', close-wound' : ''} (winding session of ${s.startedAt.toISOString().slice(0, 10)})`,
   });
   await database().update(windingSessions).set({ adoptedRevision: saved.revision }).where(eq(windingSessions.id, sessionId));
   return { session: await oneView(await sessionRow(designId, sessionId)), design: saved };
