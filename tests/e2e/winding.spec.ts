@@ -97,7 +97,7 @@ test('a winding session at 40 rpm catches a counter missing counts, keeps a read
   await page.getByRole('button', { name: 'Finish session' }).click();
   const done = page.getByTestId('finished-session');
   await expect(done).toBeVisible();
-  await expect(done.getByRole('heading')).toContainText('1030 turns over');
+  await expect(done.getByRole('heading', { level: 3 })).toContainText('1030 turns over');
   await expect(page.getByTestId('finished-flags')).toContainText('counter 385, height 410');
   await expect(done.getByRole('link', { name: 'Export CSV' })).toHaveAttribute('href', /\/export\.csv$/);
 
