@@ -212,6 +212,9 @@ describe('pause, resume and finish', () => {
     expect(list).toHaveLength(1);
     expect(list[0].readings.some((x) => x.flag?.correctedCount === 330)).toBe(true);
     expect((await anon.get('/api/v1/shared/not-a-real-token-000000/winding')).status).toBe(404);
+    const pageHtml = await (await anon.get(`/s/${token}`)).text();
+    expect(pageHtml).toContain('As wound');
+    expect(pageHtml).toContain('counter 300, height 330');
   });
 
   it('GET export.csv writes the plan, each reading with its flag and the pause', async () => {
