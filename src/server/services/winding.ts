@@ -129,9 +129,13 @@ async function oneView(s: SessionRow): Promise<WindingSession> {
 /** The sessions of a design, newest first: all of them for owners and editors, the finished ones for everyone else who can read it. */
 export async function listWindingSessions(u: SessionUser | null, designId: string): Promise<WindingSessionListResponse> {
   const { role } = await authorize(designId, u, 'read');
+  return windingSessionsOf(designId, designCan(role, 'write'));
+}
+
+/** The sessions of a design already authorized (a page's loader did it): all of them for a writer, else the finished ones. */
+export async function windingSessionsOf(designId: string, canWrite: boolean): Promise<WindingSessionListResponse> {
   const rows = await database().select().from(windingSessions).where(eq(windingSessions.designId, designId)).orderBy(desc(windingSessions.startedAt));
-  const visible = designCan(role, 'write') ? rows : rows.filter((r) => r.status === 'finished');
-  return { sessions: await viewsOf(visible) };
+  return { sessions: await viewsOf(canWrite ? rows : rows.filter((r) => r.status === 'finished')) };
 }
 
 /** The finished sessions of a shared design, without sign-in. */
