@@ -10,6 +10,7 @@ import { createDesign } from '../src/server/services/designs';
 import { withDatabase } from '../src/server/services/database';
 import { toSessionUser } from '../src/server/session';
 import { exampleDesigns } from '../src/lib/design/examples';
+import { seedWindingDemo } from './seed-winding';
 
 export const demoAccounts = {
   member: { name: 'Noor Achterberg', email: 'noor@harbourlane.example', password: 'spark-gap-2026' },
@@ -40,9 +41,9 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
   const member = await ensureUser(db, auth, demoAccounts.member, 'member');
   await ensureUser(db, auth, demoAccounts.admin, 'admin');
   const helper = await ensureUser(db, auth, demoAccounts.helper, 'member');
-  if (!member.created) return { created: false };
-
   const owner = toSessionUser(member.row as unknown as Record<string, unknown>);
+  if (!member.created) return { created: await seedWindingDemo(db, owner) };
+
   const made: string[] = [];
   for (const ex of exampleDesigns) {
     const d = await withDatabase(db, () => createDesign(owner, { name: ex.name, design: ex.design, message: 'First draft for the open day' }));
@@ -50,5 +51,6 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
   }
   if (made[1]) await db.insert(designMembers).values({ designId: made[1], userId: helper.row.id, role: 'editor' });
   if (made[0]) await db.insert(designMembers).values({ designId: made[0], userId: helper.row.id, role: 'viewer' });
+  await seedWindingDemo(db, owner);
   return { created: true };
 }

@@ -10,6 +10,8 @@ export const MEASUREMENT_KINDS = {
   coupling: { label: 'Coupling coefficient k', unit: '1', instrument: 'line-frequency drive, M = V/(ωI)', bench: 'coupling' },
   'spark-length': { label: 'Spark length (straight line to a grounded target)', unit: 'm', instrument: 'tape measure', bench: 'sparkLength' },
   'tap-position': { label: 'Best tap found', unit: 'turns', instrument: 'tap sweep at low power', bench: 'tapTurns' },
+  'wound-turns': { label: 'Secondary turns wound', unit: 'turns', instrument: 'turn counter checked against the winding height', bench: 'woundTurns' },
+  'winding-length': { label: 'Secondary winding length, measured', unit: 'm', instrument: 'steel rule or tape', bench: 'windingLength' },
 } as const satisfies Record<string, { label: string; unit: string; instrument: string; bench: keyof BenchValues }>;
 
 export type MeasurementKind = keyof typeof MEASUREMENT_KINDS;
@@ -33,6 +35,10 @@ export function predictionFor(kind: MeasurementKind, result: Result | null): num
       return result.supply?.sparkLengthEstimate ?? null;
     case 'tap-position':
       return result.tuning?.tapTurns ?? null;
+    case 'wound-turns':
+      return result.secondary ? Math.round(result.secondary.windingLength / result.secondary.pitch) : null;
+    case 'winding-length':
+      return result.secondary?.windingLength ?? null;
   }
 }
 

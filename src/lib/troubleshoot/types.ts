@@ -30,6 +30,8 @@ export interface BenchValues {
   coupling?: number;
   sparkLength?: number;
   tapTurns?: number;
+  woundTurns?: number;
+  windingLength?: number;
 }
 
 export interface TroubleshootContext {

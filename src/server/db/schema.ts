@@ -4,6 +4,7 @@ import type { DesignInput } from '../../lib/design/schema';
 import type { MeasurementKind, ResultSummary, StoredCalibration, UnitSystem } from '../../lib/api/contracts';
 import { MEMBER_ROLES } from '../../lib/api/contracts/members';
 import { ATTACHMENT_KINDS } from '../../lib/api/contracts/attachments';
+import { HEIGHT_DATUMS, PAUSE_REASON_IDS } from '../../lib/winding';
 
 const now = sql`(cast(unixepoch('subsecond') * 1000 as integer))`;
 const createdAt = () => integer('created_at', { mode: 'timestamp_ms' }).default(now).notNull();
@@ -204,3 +205,88 @@ export const attachments = sqliteTable(
   },
   (t) => [index('attachments_design_idx').on(t.designId)],
 );
+
+// A winding session at the jig: the winder speed, the spool, the readings, the pauses and what was wound.
+export const windingSessions = sqliteTable(
+  'winding_sessions',
+  {
+    id: text('id').primaryKey(),
+    designId: text('design_id')
+      .notNull()
+      .references(() => designs.id, { onDelete: 'cascade' }),
+    /** the design revision the session winds */
+    revision: integer('revision').notNull(),
+    startedBy: text('started_by').references(() => user.id, { onDelete: 'set null' }),
+    status: text('status', { enum: ['running', 'paused', 'finished'] }).notNull(),
+    rpm: real('rpm').notNull(),
+    /** wire on the spool at the start, m */
+    spoolLength: real('spool_length'),
+    /** bare form below the first turn, m */
+    startOffset: real('start_offset').notNull(),
+    formLength: real('form_length').notNull(),
+    /** the plan taken from the design at the start */
+    plannedTurns: integer('planned_turns').notNull(),
+    pitch: real('pitch').notNull(),
+    pitchSource: text('pitch_source', { enum: ['insulated-diameter', 'design-spacing'] }).notNull(),
+    windingDiameter: real('winding_diameter').notNull(),
+    insulatedDiameter: real('insulated_diameter').notNull(),
+    plannedLength: real('planned_length').notNull(),
+    plannedWire: real('planned_wire').notNull(),
+    startedAt: integer('started_at', { mode: 'timestamp_ms' }).notNull(),
+    finishedAt: integer('finished_at', { mode: 'timestamp_ms' }),
+    woundTurns: integer('wound_turns'),
+    /** measured winding length, m */
+    windingLength: real('winding_length'),
+    notes: text('notes'),
+    adoptedRevision: integer('adopted_revision'),
+    createdAt: createdAt(),
+  },
+  (t) => [index('winding_sessions_design_idx').on(t.designId)],
+);
+
+export const windingReadings = sqliteTable(
+  'winding_readings',
+  {
+    /** made by the client, so a reading sent twice (offline, then again) is stored once */
+    id: text('id').primaryKey(),
+    sessionId: text('session_id')
+      .notNull()
+      .references(() => windingSessions.id, { onDelete: 'cascade' }),
+    at: integer('at', { mode: 'timestamp_ms' }).notNull(),
+    counter: integer('counter').notNull(),
+    /** m, by its datum */
+    height: real('height'),
+    datum: text('datum', { enum: HEIGHT_DATUMS }),
+    createdAt: createdAt(),
+  },
+  (t) => [index('winding_readings_session_idx').on(t.sessionId, t.at)],
+);
+
+export const windingPauses = sqliteTable(
+  'winding_pauses',
+  {
+    id: text('id').primaryKey(),
+    sessionId: text('session_id')
+      .notNull()
+      .references(() => windingSessions.id, { onDelete: 'cascade' }),
+    reason: text('reason', { enum: PAUSE_REASON_IDS }).notNull(),
+    note: text('note'),
+    startedAt: integer('started_at', { mode: 'timestamp_ms' }).notNull(),
+    endedAt: integer('ended_at', { mode: 'timestamp_ms' }),
+  },
+  (t) => [index('winding_pauses_session_idx').on(t.sessionId)],
+);
+
+export const windingChecklists = sqliteTable('winding_checklists', {
+  sessionId: text('session_id')
+    .primaryKey()
+    .references(() => windingSessions.id, { onDelete: 'cascade' }),
+  baseEndFastened: integer('base_end_fastened', { mode: 'boolean' }).notNull().default(false),
+  topEndFastened: integer('top_end_fastened', { mode: 'boolean' }).notNull().default(false),
+  coating: text('coating'),
+  coats: integer('coats'),
+  /** between coats, hours */
+  dryingHours: real('drying_hours'),
+  notes: text('notes'),
+  updatedAt: updatedAt(),
+});

@@ -16,3 +16,4 @@ export * from './me';
 export * from './solve';
 export * from './design-files';
 export * from './reports';
+export * from './winding';

@@ -11,6 +11,8 @@ export const MEASUREMENT_RANGES: Record<MeasurementKind, { max: number; hint: st
   coupling: { max: 0.999, hint: 'k as a number between 0 and 1' },
   'spark-length': { max: 100, hint: 'in metres' },
   'tap-position': { max: 1000, hint: 'turns from the inner end' },
+  'wound-turns': { max: 100000, hint: 'turns on the secondary' },
+  'winding-length': { max: 10, hint: 'in metres, e.g. 0.56 for 560 mm' },
 };
 
 export const measurementKindSchema = z.enum(MEASUREMENT_KIND_IDS, {

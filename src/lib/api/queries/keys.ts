@@ -7,6 +7,7 @@ export const keys = {
   shares: (id: string) => ['designs', id, 'shares'] as const,
   measurements: (id: string) => ['designs', id, 'measurements'] as const,
   attachments: (id: string) => ['designs', id, 'attachments'] as const,
+  winding: (id: string) => ['designs', id, 'winding'] as const,
   summary: (endpoint: string, format: string) => ['summary', endpoint, format] as const,
   users: (page: { limit: number; offset: number; search: string }) => ['admin', 'users', page] as const,
   usersAll: ['admin', 'users'] as const,

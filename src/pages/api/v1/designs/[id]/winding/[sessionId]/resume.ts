@@ -1,0 +1,12 @@
+import type { APIRoute } from 'astro';
+import { windingIdParamSchema, windingResumeBodySchema } from '../../../../../../../lib/api/contracts';
+import { handle, parseBody, parseParam, requireUser } from '../../../../../../../server/http';
+import { resumeWindingSession } from '../../../../../../../server/services/winding';
+
+export const prerender = false;
+
+export const POST: APIRoute = handle(async ({ locals, params, request }) => {
+  const u = requireUser(locals);
+  const sessionId = parseParam(params.sessionId, windingIdParamSchema, 'No such winding session.');
+  return Response.json(await resumeWindingSession(u, params.id!, sessionId, await parseBody(request, windingResumeBodySchema)));
+});
