@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { randomUUID } from 'node:crypto';
 import { readdirSync, readFileSync } from 'node:fs';
 import { join, relative, resolve, sep } from 'node:path';
 import sharp from 'sharp';
@@ -69,6 +70,17 @@ const withMembers = async () => {
 };
 let editorAccount: { c: Client; email: string; id: string };
 let viewerAccount: { c: Client; email: string; id: string };
+
+const now = () => new Date().toISOString();
+type Session = { id: string; plan: { turns: number; windingLength: number } };
+/** A design shared with the editor and viewer, with a winding session under way (or paused, or finished). */
+const windingOn = async (state: 'running' | 'paused' | 'finished' = 'running') => {
+  const id = await withMembers();
+  const sess = (await ownerPost(`/api/v1/designs/${id}/winding`, { rpm: 40 })) as Session;
+  if (state === 'paused') await ownerPost(`/api/v1/designs/${id}/winding/${sess.id}/pause`, { reason: 'splice', at: now() });
+  if (state === 'finished') await ownerPost(`/api/v1/designs/${id}/winding/${sess.id}/finish`, { at: now(), woundTurns: sess.plan.turns, windingLength: sess.plan.windingLength });
+  return { id, sessionId: sess.id };
+};
 
 const rows: Row[] = [
   // designs
@@ -169,6 +181,33 @@ const rows: Row[] = [
       return { attachmentId: (await r.json()).id };
     },
   },
+  // the winding session
+  { method: 'GET', file: 'api/v1/designs/[id]/winding/index.ts', path: '/api/v1/designs/:id/winding', expect: read },
+  { method: 'POST', file: 'api/v1/designs/[id]/winding/index.ts', path: '/api/v1/designs/:id/winding', expect: write(201), prepare: async () => ({ id: await withMembers() }), body: () => ({ rpm: 40 }) },
+  { method: 'GET', file: 'api/v1/designs/[id]/winding/[sessionId]/index.ts', path: '/api/v1/designs/:id/winding/:sessionId', expect: read, note: 'a finished session' },
+  { method: 'GET', file: 'api/v1/designs/[id]/winding/[sessionId]/export.csv.ts', path: '/api/v1/designs/:id/winding/:sessionId/export.csv', expect: read },
+  { method: 'PUT', file: 'api/v1/designs/[id]/winding/[sessionId]/checklist.ts', path: '/api/v1/designs/:id/winding/:sessionId/checklist', expect: write(200), body: () => ({ coats: 3 }) },
+  {
+    method: 'POST',
+    file: 'api/v1/designs/[id]/winding/[sessionId]/readings.ts',
+    path: '/api/v1/designs/:id/winding/:sessionId/readings',
+    expect: write(201),
+    prepare: () => windingOn('running'),
+    body: () => ({ id: randomUUID(), at: now(), counter: 12 }),
+  },
+  { method: 'POST', file: 'api/v1/designs/[id]/winding/[sessionId]/pause.ts', path: '/api/v1/designs/:id/winding/:sessionId/pause', expect: write(200), prepare: () => windingOn('running'), body: () => ({ reason: 'break', at: now() }) },
+  { method: 'POST', file: 'api/v1/designs/[id]/winding/[sessionId]/resume.ts', path: '/api/v1/designs/:id/winding/:sessionId/resume', expect: write(200), prepare: () => windingOn('paused'), body: () => ({ at: now() }) },
+  {
+    method: 'POST',
+    file: 'api/v1/designs/[id]/winding/[sessionId]/finish.ts',
+    path: '/api/v1/designs/:id/winding/:sessionId/finish',
+    expect: write(200),
+    prepare: () => windingOn('running'),
+    body: () => ({ at: now(), woundTurns: 1000, windingLength: 0.5 }),
+  },
+  { method: 'POST', file: 'api/v1/designs/[id]/winding/[sessionId]/adopt.ts', path: '/api/v1/designs/:id/winding/:sessionId/adopt', expect: write(200), prepare: () => windingOn('finished') },
+  { method: 'GET', file: 'api/v1/shared/[token]/winding.ts', path: '/api/v1/shared/:shareToken/winding', expect: open(200) },
+  { method: 'GET', file: 'designs/[id]/winding.astro', path: '/designs/:id/winding', expect: page },
   // account and public
   { method: 'GET', file: 'api/v1/me.ts', path: '/api/v1/me', expect: signedIn(200) },
   { method: 'PATCH', file: 'api/v1/me.ts', path: '/api/v1/me', expect: signedIn(200), body: () => ({ unitSystem: 'metric' }) },
@@ -255,6 +294,9 @@ describe('the access matrix against a running server', () => {
     base.openToken = tokenFromLink(linkIn(mail.text), '/invitations/');
     const up = await c.owner.req('POST', `/api/v1/designs/${base.id}/attachments`, photo());
     base.attachmentId = (await up.json()).id;
+    const wound = (await ownerPost(`/api/v1/designs/${base.id}/winding`, { rpm: 60 })) as Session;
+    await ownerPost(`/api/v1/designs/${base.id}/winding/${wound.id}/finish`, { at: now(), woundTurns: wound.plan.turns, windingLength: wound.plan.windingLength });
+    base.sessionId = wound.id;
   }, 120_000);
   afterAll(async () => {
     await s?.stop();

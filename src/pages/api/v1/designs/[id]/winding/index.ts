@@ -5,7 +5,7 @@ import { listWindingSessions, startWindingSession } from '../../../../../../serv
 
 export const prerender = false;
 
-export const GET: APIRoute = handle(async ({ locals, params }) => Response.json(await listWindingSessions(locals.user, params.id!)));
+export const GET: APIRoute = handle(async ({ locals, params }) => Response.json(await listWindingSessions(requireUser(locals), params.id!)));
 
 export const POST: APIRoute = handle(async ({ locals, params, request }) => {
   const u = requireUser(locals);
