@@ -21,6 +21,7 @@ import {
 import { json, media, type ResponseDoc, type RouteDoc } from './openapi-types';
 import { libraryRoutes } from './openapi-routes-library';
 import { workbenchRoutes } from './openapi-routes-workbench';
+import { groupRoutes } from './openapi-routes-groups';
 
 const coreRoutes: RouteDoc[] = [
   { method: 'post', path: '/api/v1/solve', summary: 'Solve one design (no sign-in needed; rate limited).', body: solveBodySchema, auth: false, responses: { 200: json(solveResponseSchema, 'The result.'), 400: 'Invalid design: error.issues names each field.', 429: 'Too many requests.' } },
@@ -41,7 +42,7 @@ const coreRoutes: RouteDoc[] = [
 ];
 
 /** Every documented route; a test checks each route file under src/pages/api/v1 appears here. */
-export const apiRoutes: readonly RouteDoc[] = [...coreRoutes, ...libraryRoutes, ...workbenchRoutes];
+export const apiRoutes: readonly RouteDoc[] = [...coreRoutes, ...libraryRoutes, ...workbenchRoutes, ...groupRoutes];
 
 type JsonSchema = Record<string, unknown>;
 

@@ -16,3 +16,5 @@ export * from './me';
 export * from './solve';
 export * from './design-files';
 export * from './reports';
+export * from './groups';
+export * from './reviews';
