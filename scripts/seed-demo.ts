@@ -10,11 +10,13 @@ import { createDesign } from '../src/server/services/designs';
 import { withDatabase } from '../src/server/services/database';
 import { toSessionUser } from '../src/server/session';
 import { exampleDesigns } from '../src/lib/design/examples';
+import { seedDemoGroup } from './seed-groups';
 
 export const demoAccounts = {
   member: { name: 'Noor Achterberg', email: 'noor@harbourlane.example', password: 'spark-gap-2026' },
   admin: { name: 'Teodor Malik', email: 'teodor@harbourlane.example', password: 'topload-admin-2026' },
   helper: { name: 'Juno Halvorsen', email: 'juno@harbourlane.example', password: 'primary-tap-2026' },
+  supervisor: { name: 'Oriel Dunmore', email: 'oriel@harbourlane.example', password: 'safety-gap-2026' },
 } as const;
 
 async function ensureUser(db: Db, auth: ReturnType<typeof createAuth>, a: { name: string; email: string; password: string }, role: 'admin' | 'member') {
@@ -40,7 +42,10 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
   const member = await ensureUser(db, auth, demoAccounts.member, 'member');
   await ensureUser(db, auth, demoAccounts.admin, 'admin');
   const helper = await ensureUser(db, auth, demoAccounts.helper, 'member');
-  if (!member.created) return { created: false };
+  const supervisor = await ensureUser(db, auth, demoAccounts.supervisor, 'member');
+  const names = [exampleDesigns[0].name, exampleDesigns[1].name] as const;
+  const ids = { admin: member.row.id, supervisor: supervisor.row.id, member: helper.row.id };
+  if (!member.created) return { created: (await seedDemoGroup(db, ids, names)).created };
 
   const owner = toSessionUser(member.row as unknown as Record<string, unknown>);
   const made: string[] = [];
@@ -50,5 +55,6 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
   }
   if (made[1]) await db.insert(designMembers).values({ designId: made[1], userId: helper.row.id, role: 'editor' });
   if (made[0]) await db.insert(designMembers).values({ designId: made[0], userId: helper.row.id, role: 'viewer' });
+  await seedDemoGroup(db, ids, names);
   return { created: true };
 }
