@@ -100,7 +100,7 @@ describe('/api/v1/groups/:groupId', () => {
 
 describe('group invitations', () => {
   it('POST and GET /groups/:groupId/invitations are the admin’s; others are refused and no mail goes out', async () => {
-    const targets = Object.fromEntries(everyone.map((w) => [w, uniqueEmail(`invitee-${w}`)])) as Record<Who, string>;
+    const targets = Object.fromEntries(everyone.map((w) => [w, uniqueEmail(`invitee-${w.toLowerCase()}`)])) as Record<Who, string>;
     expect(await matrix((w) => c[w].post(`/api/v1/groups/${groupId}/invitations`, { email: targets[w], role: 'member' }), GROUP)).toEqual(adminOnly(201));
     expect(await matrix((w) => c[w].get(`/api/v1/groups/${groupId}/invitations`), GROUP)).toEqual(adminOnly(200));
     await waitForMail(s.url, targets.groupAdmin, 'Invitation to the group');
@@ -179,7 +179,7 @@ describe('group invitations', () => {
 
   it('DELETE /groups/:groupId/invitations/:id withdraws for the admin only', async () => {
     const ids: string[] = [];
-    for (const w of everyone) ids.push((await (await c.groupAdmin.post(`/api/v1/groups/${groupId}/invitations`, { email: uniqueEmail(`withdraw-${w}`), role: 'member' })).json()).id);
+    for (const w of everyone) ids.push((await (await c.groupAdmin.post(`/api/v1/groups/${groupId}/invitations`, { email: uniqueEmail(`withdraw-${w.toLowerCase()}`), role: 'member' })).json()).id);
     const got: Partial<Record<Who, number>> = {};
     for (const [i, w] of everyone.entries()) got[w] = (await c[w].del(`/api/v1/groups/${groupId}/invitations/${ids[i]}`)).status;
     expect(got).toEqual(adminOnly(204));

@@ -24,12 +24,15 @@ function ReviewPanel({ designId, revision, canWrite, myUserId, initialReviewId }
   const reviews = useReviews(designId);
   const list = reviews.data ?? [];
   const [selected, setSelected] = useState<string | null>(initialReviewId);
+  // kept here: the form itself goes away once a request is waiting
+  const [notice, setNotice] = useState<string | null>(null);
   const open = list.find((r) => r.state === 'requested');
   const shown = selected ?? open?.id ?? null;
   return (
     <div className="space-y-8">
       {reviews.error && <p className="cw-alert" role="alert">{failureMessage(reviews.error)}</p>}
-      {canWrite && !open && <RequestForm designId={designId} revision={revision} myUserId={myUserId} onRequested={(id) => setSelected(id)} />}
+      <FormMessage success={notice} />
+      {canWrite && !open && <RequestForm designId={designId} revision={revision} myUserId={myUserId} onRequested={(id, message) => { setSelected(id); setNotice(message); }} />}
       {open && <p className="cw-card" data-testid="open-request">Revision {open.revision} is waiting for review: asked by {open.requestedBy} on {day(open.requestedAt)}, of {open.askedOf === 'reviewer' ? open.reviewer : 'the group’s supervisors'}.</p>}
       <section aria-labelledby="reviews-title">
         <h2 id="reviews-title" className="text-xl">Reviews</h2>
@@ -71,7 +74,7 @@ function ReviewPanel({ designId, revision, canWrite, myUserId, initialReviewId }
   );
 }
 
-function RequestForm({ designId, revision, myUserId, onRequested }: { designId: string; revision: number; myUserId: string; onRequested: (id: string) => void }) {
+function RequestForm({ designId, revision, myUserId, onRequested }: { designId: string; revision: number; myUserId: string; onRequested: (id: string, message: string) => void }) {
   const members = useMembers(designId);
   const group = useDesignGroup(designId);
   const ask = useRequestReview(designId);
@@ -79,7 +82,6 @@ function RequestForm({ designId, revision, myUserId, onRequested }: { designId: 
   const [reviewer, setReviewer] = useState('');
   const [note, setNote] = useState('');
   const [failure, setFailure] = useState<ApiFailure | null>(null);
-  const [done, setDone] = useState<string | null>(null);
   const supervisors = group.data?.groupId ? group.data.members.filter((m) => m.reviews && m.userId !== myUserId) : [];
   const people = new Map<string, string>();
   for (const p of members.data ?? []) if (p.userId !== myUserId) people.set(p.userId, p.name);
@@ -89,15 +91,15 @@ function RequestForm({ designId, revision, myUserId, onRequested }: { designId: 
   async function submit(e: FormEvent) {
     e.preventDefault();
     setFailure(null);
-    setDone(null);
-    const n = Number(rev);
+    if (!/^\d+$/.test(rev.trim())) {
+      const message = 'Give the revision to review (a whole number).';
+      return setFailure(new ApiFailure(400, 'validation_failed', message, [{ path: 'revision', message }]));
+    }
     try {
-      const r = await ask.mutateAsync({ revision: Number.isInteger(n) ? n : (rev as unknown as number), ...(reviewer ? { reviewerId: reviewer } : {}), ...(note.trim() ? { note: note.trim() } : {}) });
-      setDone(`Review of revision ${r.revision} requested; the reviewer${r.askedOf === 'supervisors' ? 's were' : ' was'} sent an e-mail.`);
-      onRequested(r.id);
+      const r = await ask.mutateAsync({ revision: Number(rev.trim()), ...(reviewer ? { reviewerId: reviewer } : {}), ...(note.trim() ? { note: note.trim() } : {}) });
+      onRequested(r.id, `Review of revision ${r.revision} requested; the reviewer${r.askedOf === 'supervisors' ? 's were' : ' was'} sent an e-mail.`);
     } catch (err) {
-      setFailure(err instanceof ApiFailure ? err : null);
-      if (!(err instanceof ApiFailure)) setDone(null);
+      setFailure(err instanceof ApiFailure ? err : new ApiFailure(0, 'unknown', failureMessage(err)));
     }
   }
 
@@ -129,7 +131,7 @@ function RequestForm({ designId, revision, myUserId, onRequested }: { designId: 
         <div className="sm:col-span-2 flex flex-wrap items-center gap-3">
           <button type="submit" className="cw-btn cw-btn-primary" disabled={ask.isPending}>{ask.isPending ? 'Asking…' : 'Ask for review'}</button>
         </div>
-        <div className="sm:col-span-2"><FormMessage error={failure ? failure.message : null} success={done} /></div>
+        <div className="sm:col-span-2"><FormMessage error={failure ? failure.message : null} /></div>
       </form>
     </section>
   );
