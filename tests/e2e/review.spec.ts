@@ -33,9 +33,14 @@ const linkIn = (text: string, path: string) => {
   return new URL(m![0]);
 };
 
+const upToDate = (page: Page) => expect(page.getByTestId('solve-state')).toHaveText('up to date');
+
+/** Changes the secondary turns on the design page and saves a new revision. */
 async function saveTurns(page: Page, turns: string, revision: number) {
+  await upToDate(page);
   await page.getByLabel('Secondary turns').fill(turns);
   await expect(page.getByTestId('save-state')).toContainText('Unsaved changes');
+  await upToDate(page);
   await page.getByRole('button', { name: 'Save', exact: true }).click();
   await expect(page.getByTestId('save-state')).toContainText(`revision ${revision}`);
 }
@@ -76,7 +81,7 @@ test('first light: a member asks, the supervisor asks for a change, the member f
   expect(made.status()).toBe(201);
   const { id } = (await made.json()) as { id: string };
   await member.goto(`/designs/${id}/people`);
-  await member.getByLabel('Group', { exact: true }).selectOption({ label: 'Dockside coil club' });
+  await member.getByRole('combobox', { name: 'Group', exact: true }).selectOption({ label: 'Dockside coil club' });
   await expect(member.getByText('The design now belongs to Dockside coil club.')).toBeVisible();
   await expect(member.getByTestId('group-people')).toContainText('Supervisor Siri');
 
