@@ -138,5 +138,18 @@ test('first light: a member asks, the supervisor asks for a change, the member f
   await sup.goto(`/designs/${id}/build`);
   await expect(sup.getByTestId('review-state')).toContainText('Signed off revision 2; changed since');
 
+  // The supervisor's library lists the group's design under the group, and the group filter keeps it.
+  const other = await supCtx.request.post('/api/v1/designs', { data: { name: 'Siri’s own coil', design: exampleDesigns[0].design } });
+  expect(other.status()).toBe(201);
+  await sup.goto('/designs');
+  const row = sup.locator(`tr[data-design-id="${id}"]`);
+  await expect(row).toContainText('Dockside coil club');
+  await sup.getByLabel('Group', { exact: true }).selectOption({ label: 'Dockside coil club' });
+  await expect(row).toBeVisible();
+  await expect(sup.getByRole('link', { name: 'Siri’s own coil', exact: true })).toHaveCount(0);
+  await sup.getByLabel('Group', { exact: true }).selectOption({ label: 'No group' });
+  await expect(row).toHaveCount(0);
+  await expect(sup.getByRole('link', { name: 'Siri’s own coil', exact: true })).toBeVisible();
+
   await Promise.all([adminCtx.close(), supCtx.close(), memberCtx.close()]);
 });
