@@ -160,6 +160,26 @@ describe('group invitations', () => {
     expect((await newcomer.c.del(`/api/v1/groups/${groupId}/members/${newcomer.id}`)).status).toBe(204);
   });
 
+  it('POST /group-invitations/:token/accept by each caller: signed-in people join with the invited role, the admin stays admin', async () => {
+    const scene = await groupScene(s.url, 'Accept matrix circle', 'Accept matrix coil');
+    const tokens = {} as Record<Who, string>;
+    for (const w of everyone) {
+      const to = uniqueEmail(`accept-${w.toLowerCase()}`);
+      expect((await scene.c.groupAdmin.post(`/api/v1/groups/${scene.groupId}/invitations`, { email: to, role: 'supervisor' })).status).toBe(201);
+      tokens[w] = tokenFromLink(linkIn((await waitForMail(s.url, to, 'Invitation to the group')).text), '/group-invitations/');
+    }
+    const got = await matrix((w) => scene.c[w].post(`/api/v1/group-invitations/${tokens[w]}/accept`));
+    expect(got).toEqual({ siteAdmin: 200, groupAdmin: 409, supervisor: 200, member: 200, outsider: 200, anonymous: 401 });
+    const roles = Object.fromEntries((await (await scene.c.groupAdmin.get(`/api/v1/groups/${scene.groupId}`)).json()).members.map((m: { userId: string; role: string }) => [m.userId, m.role]));
+    expect(roles[scene.people.groupAdmin.id]).toBe('admin');
+    expect(roles[scene.people.member.id]).toBe('supervisor');
+    expect(roles[scene.people.outsider.id]).toBe('supervisor');
+    // The refused calls left their links unused.
+    expect((await scene.c.anonymous.get(`/api/v1/group-invitations/${tokens.anonymous}`)).status).toBe(200);
+    expect((await scene.c.anonymous.get(`/api/v1/group-invitations/${tokens.groupAdmin}`)).status).toBe(200);
+    expect((await scene.c.anonymous.get(`/api/v1/group-invitations/${tokens.outsider}`)).status).toBe(404);
+  });
+
   it('an invitation older than two weeks no longer works; unknown tokens are 404', async () => {
     const to = uniqueEmail('late');
     await c.groupAdmin.post(`/api/v1/groups/${groupId}/invitations`, { email: to, role: 'member' });
