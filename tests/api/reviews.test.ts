@@ -224,3 +224,26 @@ describe('POST /api/v1/designs/:id/reviews/:reviewId/decision', () => {
     expect((await reviewsOf(id))[0].state).toBe('requested');
   });
 });
+
+describe('the demo scenario', () => {
+  it('the Harbour Lane coil club has a supervisor; one of its designs is signed off, the other has changes requested', async () => {
+    const { demoAccounts } = await import('../../scripts/seed-demo');
+    const { Client } = await import('../helpers/client');
+    const oriel = new Client(s.url);
+    await oriel.signIn(demoAccounts.supervisor.email, demoAccounts.supervisor.password);
+    const groups = (await (await oriel.get('/api/v1/groups')).json()).groups;
+    expect(groups).toEqual([expect.objectContaining({ name: 'Harbour Lane coil club', role: 'supervisor', memberCount: 3 })]);
+    const designs = ((await (await oriel.get('/api/v1/designs')).json()).designs as Array<{ id: string; name: string; groupName: string | null; role: string }>).filter((d) => d.groupName === 'Harbour Lane coil club');
+    expect(designs).toHaveLength(2);
+    const states: string[] = [];
+    for (const d of designs) {
+      expect(d.role).toBe('editor');
+      const [latest] = await reviewsOf(d.id, oriel);
+      states.push(latest.state);
+      expect(latest).toMatchObject({ reviewer: 'Oriel Dunmore', current: true });
+      const page = await (await oriel.get(`/designs/${d.id}`)).text();
+      expect(page.includes(latest.state === 'signed_off' ? 'Signed off for first light: revision 1' : 'Changes requested on revision 1')).toBe(true);
+    }
+    expect(states.sort()).toEqual(['changes_requested', 'signed_off']);
+  });
+});
