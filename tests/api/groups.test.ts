@@ -310,6 +310,17 @@ describe('designs in a group', () => {
     expect(got).toEqual({ siteAdmin: 403, groupAdmin: 200, supervisor: 200, member: 200, outsider: 404, anonymous: 401 });
   });
 
+  it('owner-only design routes stay the owner’s: group people cannot delete, share, invite or transfer it', async () => {
+    const refused = { siteAdmin: 403, supervisor: 403, member: 403, outsider: 404, anonymous: 401 };
+    const order: Who[] = ['siteAdmin', 'supervisor', 'member', 'outsider', 'anonymous'];
+    expect(await matrix((w) => c[w].del(`/api/v1/designs/${designId}`), DESIGN, order)).toEqual(refused);
+    expect(await matrix((w) => c[w].post(`/api/v1/designs/${designId}/share`), DESIGN, order)).toEqual(refused);
+    expect(await matrix((w) => c[w].post(`/api/v1/designs/${designId}/invitations`, { email: uniqueEmail('nobody'), role: 'viewer' }), DESIGN, order)).toEqual(refused);
+    expect(await matrix((w) => c[w].post(`/api/v1/designs/${designId}/transfer`, { userId: people.member.id }), DESIGN, order)).toEqual(refused);
+    expect((await (await c.groupAdmin.get(`/api/v1/designs/${designId}`)).json()).role).toBe('owner');
+    expect((await (await c.groupAdmin.get(`/api/v1/designs/${designId}/share`)).json()).shares).toEqual([]);
+  });
+
   it('GET /api/v1/designs lists the group’s designs with the group’s name for its members', async () => {
     const row = async (w: Who) => ((await (await c[w].get('/api/v1/designs')).json()).designs as Array<{ id: string; role: string; groupId: string | null; groupName: string | null }>).find((d) => d.id === designId);
     expect(await row('member')).toMatchObject({ role: 'editor', groupId, groupName: GROUP });
