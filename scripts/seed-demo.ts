@@ -11,11 +11,13 @@ import { withDatabase } from '../src/server/services/database';
 import { toSessionUser } from '../src/server/session';
 import { exampleDesigns } from '../src/lib/design/examples';
 import { seedWindingDemo } from './seed-winding';
+import { seedDemoGroup } from './seed-groups';
 
 export const demoAccounts = {
   member: { name: 'Noor Achterberg', email: 'noor@harbourlane.example', password: 'spark-gap-2026' },
   admin: { name: 'Teodor Malik', email: 'teodor@harbourlane.example', password: 'topload-admin-2026' },
   helper: { name: 'Juno Halvorsen', email: 'juno@harbourlane.example', password: 'primary-tap-2026' },
+  supervisor: { name: 'Oriel Dunmore', email: 'oriel@harbourlane.example', password: 'safety-gap-2026' },
 } as const;
 
 async function ensureUser(db: Db, auth: ReturnType<typeof createAuth>, a: { name: string; email: string; password: string }, role: 'admin' | 'member') {
@@ -41,8 +43,16 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
   const member = await ensureUser(db, auth, demoAccounts.member, 'member');
   await ensureUser(db, auth, demoAccounts.admin, 'admin');
   const helper = await ensureUser(db, auth, demoAccounts.helper, 'member');
+  const supervisor = await ensureUser(db, auth, demoAccounts.supervisor, 'member');
+  const names = [exampleDesigns[0].name, exampleDesigns[1].name] as const;
+  const ids = { admin: member.row.id, supervisor: supervisor.row.id, member: helper.row.id };
   const owner = toSessionUser(member.row as unknown as Record<string, unknown>);
-  if (!member.created) return { created: await seedWindingDemo(db, owner) };
+  if (!member.created) {
+    // An older demo database gets what was added since, once.
+    const wound = await seedWindingDemo(db, owner);
+    const grouped = (await seedDemoGroup(db, ids, names)).created;
+    return { created: wound || grouped };
+  }
 
   const made: string[] = [];
   for (const ex of exampleDesigns) {
@@ -52,5 +62,6 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
   if (made[1]) await db.insert(designMembers).values({ designId: made[1], userId: helper.row.id, role: 'editor' });
   if (made[0]) await db.insert(designMembers).values({ designId: made[0], userId: helper.row.id, role: 'viewer' });
   await seedWindingDemo(db, owner);
+  await seedDemoGroup(db, ids, names);
   return { created: true };
 }

@@ -34,3 +34,30 @@ const designPermissions: Record<DesignRole, readonly DesignAction[]> = {
 export function designCan(role: DesignRole | null | undefined, action: DesignAction): boolean {
   return role ? designPermissions[role].includes(action) : false;
 }
+
+/** Roles inside a group (admin manages it, supervisors review before first light, members build). */
+export type GroupRole = 'admin' | 'member' | 'supervisor';
+
+/**
+ * The design role a group role grants on the group's designs: everyone in the group edits. Supervisors may in
+ * addition decide first-light reviews (see `groupCanReview`).
+ */
+const groupDesignRole: Record<GroupRole, Exclude<DesignRole, 'owner' | 'admin'>> = { admin: 'editor', member: 'editor', supervisor: 'editor' };
+
+export function designRoleOfGroupRole(role: GroupRole): DesignRole {
+  return groupDesignRole[role];
+}
+
+/** Whether a group role may decide the first-light reviews of the group's designs. */
+export function groupCanReview(role: GroupRole | null | undefined): boolean {
+  return role === 'supervisor';
+}
+
+const strength: Record<DesignRole, number> = { admin: 0, viewer: 1, editor: 2, owner: 3 };
+
+/** The stronger of two design roles, when a person holds one of their own and one through a group. */
+export function strongerDesignRole(a: DesignRole | null, b: DesignRole | null): DesignRole {
+  if (!a) return b!;
+  if (!b) return a;
+  return strength[b] > strength[a] ? b : a;
+}

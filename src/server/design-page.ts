@@ -14,6 +14,9 @@ import { troubleshootOf } from './services/troubleshoot';
 import type { TroubleshootQuery } from '../lib/api/contracts';
 import { buildSheetOf } from './services/build-sheet';
 import type { BuildSheetQuery } from '../lib/buildsheet';
+import { reviewsOf } from './services/reviews';
+import { reviewStatus, type ReviewStatus } from '../lib/review/status';
+import type { GroupRole } from '../lib/permissions';
 
 /**
  * One design as the pages under /designs/[id] see it: authorized once and solved at most once per request,
@@ -27,6 +30,9 @@ export type DesignPage = {
   role: DesignRole;
   canWrite: boolean;
   updatedAt: string;
+  /** the design's group, and the viewer's role in it (null when not in it) */
+  groupId: string | null;
+  groupRole: GroupRole | null;
   /** The design as stored: the user's input, units and all. */
   input: DesignRow['design'];
   /** The stored design parsed, and its result solved on first read. */
@@ -41,6 +47,10 @@ export type DesignPage = {
   troubleshoot(query: TroubleshootQuery): ReturnType<typeof troubleshootOf>;
   buildSheet(query: BuildSheetQuery): ReturnType<typeof buildSheetOf>;
   revisions(): ReturnType<typeof revisionsOf>;
+  /** First-light reviews, newest first, each marked current or not against this revision. */
+  reviews(): ReturnType<typeof reviewsOf>;
+  /** The first-light state in one line (read once per request). */
+  reviewStatus(): Promise<ReviewStatus>;
   /** One saved revision, or null when there is no such revision. */
   readRevision(n: number): Promise<Awaited<ReturnType<typeof revisionOf>> | null>;
   /** Two revisions compared, or null when either does not exist. */
@@ -69,8 +79,10 @@ async function orNull<T>(load: () => Promise<T>): Promise<T | null> {
 export async function openDesignPage(user: SessionUser, id: string, options: DesignPageOptions = {}): Promise<DesignPage | null> {
   const found = await orNull(() => authorize(id, user, 'read'));
   if (!found) return null;
-  const { row, role } = found;
+  const { row, role, groupRole } = found;
   const solved = solvedRow(row, options.solver);
+  let reviews: ReturnType<typeof reviewsOf> | undefined;
+  const loadReviews = () => (reviews ??= reviewsOf(row.id, row.revision));
   const base = { name: row.name, revision: row.revision, role };
   return {
     user,
@@ -78,6 +90,8 @@ export async function openDesignPage(user: SessionUser, id: string, options: Des
     ...base,
     canWrite: designCan(role, 'write'),
     updatedAt: row.updatedAt.toISOString(),
+    groupId: row.groupId,
+    groupRole,
     input: row.design,
     solved,
     get result() {
@@ -92,6 +106,8 @@ export async function openDesignPage(user: SessionUser, id: string, options: Des
     troubleshoot: (query) => troubleshootOf(solved, query),
     buildSheet: (query) => buildSheetOf({ ...base, solved }, query),
     revisions: () => revisionsOf(row.id),
+    reviews: loadReviews,
+    reviewStatus: async () => reviewStatus(await loadReviews(), row.revision),
     readRevision: (n) => (Number.isInteger(n) && n >= 1 ? orNull(() => revisionOf(row.id, n)) : Promise.resolve(null)),
     compare: (from, to) =>
       Number.isInteger(from) && Number.isInteger(to) && from >= 1 && to >= 1 ? orNull(() => compareOf(row.id, from, to)) : Promise.resolve(null),

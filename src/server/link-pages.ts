@@ -1,6 +1,7 @@
 import { ApiError } from './http';
 import { getShared } from './services/shares';
 import { describeInvitation } from './services/invitations';
+import { describeGroupInvitation } from './services/groups';
 
 /** A link that leads nowhere (unknown, revoked, expired or malformed token) becomes null, for the page to say so. */
 async function orNull<T>(load: () => Promise<T>): Promise<T | null> {
@@ -20,4 +21,9 @@ export function loadSharedDesign(token: string) {
 /** The invitation behind an invitation link, for /invitations/[token]. */
 export function loadInvitation(token: string) {
   return orNull(() => describeInvitation(token));
+}
+
+/** The group invitation behind a link, for /group-invitations/[token]. */
+export function loadGroupInvitation(token: string) {
+  return orNull(() => describeGroupInvitation(token));
 }

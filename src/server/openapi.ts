@@ -22,6 +22,7 @@ import { json, media, type ResponseDoc, type RouteDoc } from './openapi-types';
 import { libraryRoutes } from './openapi-routes-library';
 import { workbenchRoutes } from './openapi-routes-workbench';
 import { windingRoutes } from './openapi-routes-winding';
+import { groupRoutes } from './openapi-routes-groups';
 
 const coreRoutes: RouteDoc[] = [
   { method: 'post', path: '/api/v1/solve', summary: 'Solve one design (no sign-in needed; rate limited).', body: solveBodySchema, auth: false, responses: { 200: json(solveResponseSchema, 'The result.'), 400: 'Invalid design: error.issues names each field.', 429: 'Too many requests.' } },
@@ -42,7 +43,7 @@ const coreRoutes: RouteDoc[] = [
 ];
 
 /** Every documented route; a test checks each route file under src/pages/api/v1 appears here. */
-export const apiRoutes: readonly RouteDoc[] = [...coreRoutes, ...libraryRoutes, ...workbenchRoutes, ...windingRoutes];
+export const apiRoutes: readonly RouteDoc[] = [...coreRoutes, ...libraryRoutes, ...workbenchRoutes, ...windingRoutes, ...groupRoutes];
 
 type JsonSchema = Record<string, unknown>;
 

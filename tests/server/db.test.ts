@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { count } from 'drizzle-orm';
 import { openDb, prepareDb } from '../../src/server/db/client';
-import { designs, user, designRevisions } from '../../src/server/db/schema';
+import { designs, user, designRevisions, groups, groupMembers, reviews } from '../../src/server/db/schema';
 import { seedDemo } from '../../scripts/seed-demo';
 
 describe('openDb / prepareDb', () => {
@@ -46,9 +46,15 @@ describe('seedDemo', () => {
       users: (await db.select({ n: count() }).from(user))[0].n,
       designs: (await db.select({ n: count() }).from(designs))[0].n,
       revisions: (await db.select({ n: count() }).from(designRevisions))[0].n,
+      groups: (await db.select({ n: count() }).from(groups))[0].n,
+      groupMembers: (await db.select({ n: count() }).from(groupMembers))[0].n,
+      reviews: (await db.select({ n: count() }).from(reviews))[0].n,
     });
     const before = await countsOf();
-    expect(before.users).toBe(3);
+    expect(before.users).toBe(4);
+    expect(before.groups).toBe(1);
+    expect(before.groupMembers).toBe(3);
+    expect((await db.select({ s: reviews.state }).from(reviews)).map((r) => r.s).sort()).toEqual(['changes_requested', 'signed_off']);
     expect(before.designs).toBe(3);
     const second = await seedDemo(db);
     expect(second.created).toBe(false);

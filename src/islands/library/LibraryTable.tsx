@@ -24,6 +24,7 @@ type Props = { pageSize?: number };
 
 const roleLabel: Record<DesignRole, string> = { owner: 'Owner', editor: 'Editor', viewer: 'Viewer', admin: 'Site admin' };
 const column = createColumnHelper<LibraryRow>();
+const NO_GROUP = '__none';
 
 
 function LibraryTable({ pageSize = 20 }: Props) {
@@ -111,6 +112,13 @@ function LibraryTable({ pageSize = 20 }: Props) {
       }),
       column.accessor('tapTurns', { header: 'Tap', cell: (c) => <span className="tabular-nums">{formatTurns(c.getValue())}</span> }),
       column.accessor('updatedAt', { header: 'Updated', sortingFn: 'datetime', cell: (c) => formatDate(c.getValue(), true) }),
+      column.accessor('groupId', {
+        header: 'Group',
+        // '' is any; NO_GROUP keeps the designs that belong to no group
+        filterFn: (row, _id, value: string) => (value === NO_GROUP ? !row.original.groupId : row.original.groupId === value),
+        sortingFn: (a, b) => (a.original.groupName ?? '').localeCompare(b.original.groupName ?? ''),
+        cell: (c) => c.row.original.groupName ?? <span className="text-ink-soft">—</span>,
+      }),
       column.accessor('role', {
         header: 'My role',
         filterFn: 'equals',
@@ -171,6 +179,8 @@ function LibraryTable({ pageSize = 20 }: Props) {
   });
 
   const roleFilter = (table.getColumn('role')?.getFilterValue() as string | undefined) ?? '';
+  const groupFilter = (table.getColumn('groupId')?.getFilterValue() as string | undefined) ?? '';
+  const groupOptions = [...new Map(rows.filter((r) => r.groupId).map((r) => [r.groupId!, r.groupName ?? 'Unnamed group'])).entries()].sort((a, b) => a[1].localeCompare(b[1]));
   const shown = table.getFilteredRowModel().rows.length;
   const { pageIndex } = table.getState().pagination;
   const from = shown === 0 ? 0 : pageIndex * pageSize + 1;
@@ -194,6 +204,18 @@ function LibraryTable({ pageSize = 20 }: Props) {
             <option value="owner">Owner</option>
             <option value="editor">Editor</option>
             <option value="viewer">Viewer</option>
+          </select>
+        </div>
+        <div>
+          <label htmlFor="library-group" className="cw-label">
+            Group
+          </label>
+          <select id="library-group" className="cw-input" value={groupFilter} onChange={(e) => table.getColumn('groupId')?.setFilterValue(e.target.value || undefined)}>
+            <option value="">Any</option>
+            {groupOptions.map(([id, name]) => (
+              <option key={id} value={id}>{name}</option>
+            ))}
+            <option value={NO_GROUP}>No group</option>
           </select>
         </div>
         <div className="flex gap-2">

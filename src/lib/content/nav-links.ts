@@ -14,7 +14,7 @@ export function navLinks(user: NavUser | null): NavLink[] {
     { href: '/validation', label: 'Validation' },
     { href: '/safety', label: 'Safety' },
   ];
-  if (user) links.push({ href: '/account', label: 'Account' });
+  if (user) links.push({ href: '/groups', label: 'Groups' }, { href: '/account', label: 'Account' });
   if (user?.role === 'admin') links.push({ href: '/admin', label: 'Admin' });
   return links;
 }

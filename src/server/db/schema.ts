@@ -4,7 +4,9 @@ import type { DesignInput } from '../../lib/design/schema';
 import type { MeasurementKind, ResultSummary, StoredCalibration, UnitSystem } from '../../lib/api/contracts';
 import { MEMBER_ROLES } from '../../lib/api/contracts/members';
 import { ATTACHMENT_KINDS } from '../../lib/api/contracts/attachments';
+import { GROUP_INVITE_ROLES, GROUP_ROLES } from '../../lib/api/contracts/groups';
 import { HEIGHT_DATUMS, PAUSE_REASON_IDS } from '../../lib/winding';
+import { FINDING_STATUSES, REVIEW_STATES } from '../../lib/api/contracts/reviews';
 
 const now = sql`(cast(unixepoch('subsecond') * 1000 as integer))`;
 const createdAt = () => integer('created_at', { mode: 'timestamp_ms' }).default(now).notNull();
@@ -84,6 +86,46 @@ export const verification = sqliteTable(
 );
 
 // Coilwright's tables.
+export const groups = sqliteTable('groups', {
+  id: text('id').primaryKey(),
+  name: text('name').notNull(),
+  createdBy: text('created_by').references(() => user.id, { onDelete: 'set null' }),
+  createdAt: createdAt(),
+});
+
+export const groupMembers = sqliteTable(
+  'group_members',
+  {
+    groupId: text('group_id')
+      .notNull()
+      .references(() => groups.id, { onDelete: 'cascade' }),
+    userId: text('user_id')
+      .notNull()
+      .references(() => user.id, { onDelete: 'cascade' }),
+    role: text('role', { enum: GROUP_ROLES }).notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [primaryKey({ columns: [t.groupId, t.userId] }), index('group_members_user_idx').on(t.userId)],
+);
+
+export const groupInvitations = sqliteTable(
+  'group_invitations',
+  {
+    id: text('id').primaryKey(),
+    groupId: text('group_id')
+      .notNull()
+      .references(() => groups.id, { onDelete: 'cascade' }),
+    email: text('email').notNull(),
+    role: text('role', { enum: GROUP_INVITE_ROLES }).notNull(),
+    tokenHash: text('token_hash').notNull().unique(),
+    invitedBy: text('invited_by').references(() => user.id, { onDelete: 'set null' }),
+    createdAt: createdAt(),
+    acceptedAt: integer('accepted_at', { mode: 'timestamp_ms' }),
+    acceptedBy: text('accepted_by').references(() => user.id, { onDelete: 'set null' }),
+  },
+  (t) => [index('group_invitations_group_idx').on(t.groupId)],
+);
+
 export const designs = sqliteTable(
   'designs',
   {
@@ -97,10 +139,12 @@ export const designs = sqliteTable(
     revision: integer('revision').notNull().default(1),
     // Measured values a builder adopted in place of predictions.
     calibration: text('calibration', { mode: 'json' }).$type<StoredCalibration>(),
+    // The group whose members reach the design; when the group goes, the design stays with its owner.
+    groupId: text('group_id').references(() => groups.id, { onDelete: 'set null' }),
     createdAt: createdAt(),
     updatedAt: updatedAt(),
   },
-  (t) => [index('designs_owner_idx').on(t.ownerId)],
+  (t) => [index('designs_owner_idx').on(t.ownerId), index('designs_group_idx').on(t.groupId)],
 );
 
 export const designRevisions = sqliteTable(
@@ -204,6 +248,41 @@ export const attachments = sqliteTable(
     createdAt: createdAt(),
   },
   (t) => [index('attachments_design_idx').on(t.designId)],
+);
+
+/** A first-light review of one revision of a design, asked of a named reviewer or of the design's group supervisors. */
+export const reviews = sqliteTable(
+  'reviews',
+  {
+    id: text('id').primaryKey(),
+    designId: text('design_id')
+      .notNull()
+      .references(() => designs.id, { onDelete: 'cascade' }),
+    revision: integer('revision').notNull(),
+    state: text('state', { enum: REVIEW_STATES }).notNull().default('requested'),
+    requestedBy: text('requested_by').references(() => user.id, { onDelete: 'set null' }),
+    // null: any supervisor of the design's group may decide
+    reviewerId: text('reviewer_id').references(() => user.id, { onDelete: 'set null' }),
+    decidedBy: text('decided_by').references(() => user.id, { onDelete: 'set null' }),
+    requestNote: text('request_note'),
+    decisionNote: text('decision_note'),
+    requestedAt: integer('requested_at', { mode: 'timestamp_ms' }).default(now).notNull(),
+    decidedAt: integer('decided_at', { mode: 'timestamp_ms' }),
+  },
+  (t) => [index('reviews_design_idx').on(t.designId)],
+);
+
+export const reviewFindings = sqliteTable(
+  'review_findings',
+  {
+    reviewId: text('review_id')
+      .notNull()
+      .references(() => reviews.id, { onDelete: 'cascade' }),
+    item: text('item').notNull(),
+    status: text('status', { enum: FINDING_STATUSES }).notNull(),
+    note: text('note').notNull().default(''),
+  },
+  (t) => [primaryKey({ columns: [t.reviewId, t.item] })],
 );
 
 // A winding session at the jig: the winder speed, the spool, the readings, the pauses and what was wound.

@@ -1,21 +1,40 @@
 import { and, eq } from 'drizzle-orm';
 import { database } from './database';
-import { designs, designMembers } from '../db/schema';
-import { designCan, type DesignAction, type DesignRole } from '../../lib/permissions';
+import { designs, designMembers, groupMembers } from '../db/schema';
+import { designCan, designRoleOfGroupRole, strongerDesignRole, type DesignAction, type DesignRole, type GroupRole } from '../../lib/permissions';
 import type { SessionUser } from '../session';
 import { ApiError } from '../http';
 
 export type DesignRow = typeof designs.$inferSelect;
 
-/** The caller's role on a design (owner, member role, or admin for site admins), with the design's row; null without one. */
-export async function roleOn(designId: string, u: SessionUser | null): Promise<{ row: DesignRow; role: DesignRole } | null> {
+export type DesignAccess = {
+  row: DesignRow;
+  role: DesignRole;
+  /** the caller's role in the design's group, when the design belongs to one and the caller is in it */
+  groupRole: GroupRole | null;
+  /** how the role was reached: a role of one's own on the design, or through the design's group */
+  via: 'direct' | 'group' | 'site';
+};
+
+/**
+ * The caller's role on a design: owner, a member role, the role their group role grants on a group's design (the
+ * stronger of the two when both apply), or admin for site admins; null without one. Group membership is read on
+ * every call, so a person removed from a group loses the design at once.
+ */
+export async function roleOn(designId: string, u: SessionUser | null): Promise<DesignAccess | null> {
   const db = database();
   const row = await db.query.designs.findFirst({ where: eq(designs.id, designId) });
   if (!row || !u) return null;
-  if (row.ownerId === u.id) return { row, role: 'owner' };
+  const g = row.groupId ? await db.query.groupMembers.findFirst({ where: and(eq(groupMembers.groupId, row.groupId), eq(groupMembers.userId, u.id)) }) : undefined;
+  const groupRole = g?.role ?? null;
+  if (row.ownerId === u.id) return { row, role: 'owner', groupRole, via: 'direct' };
   const m = await db.query.designMembers.findFirst({ where: and(eq(designMembers.designId, designId), eq(designMembers.userId, u.id)) });
-  if (m) return { row, role: m.role };
-  if (u.role === 'admin') return { row, role: 'admin' };
+  const fromGroup = groupRole ? designRoleOfGroupRole(groupRole) : null;
+  if (m || fromGroup) {
+    const role = strongerDesignRole(m?.role ?? null, fromGroup);
+    return { row, role, groupRole, via: m && (!fromGroup || role === m.role) ? 'direct' : 'group' };
+  }
+  if (u.role === 'admin') return { row, role: 'admin', groupRole: null, via: 'site' };
   return null;
 }
 

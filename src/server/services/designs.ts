@@ -1,8 +1,8 @@
 import { and, eq, inArray } from 'drizzle-orm';
 import { randomUUID } from 'node:crypto';
 import { database } from './database';
-import { designs, designRevisions, designMembers } from '../db/schema';
-import type { DesignRole } from '../../lib/permissions';
+import { designs, designRevisions, designMembers, groupMembers, groups } from '../db/schema';
+import { designRoleOfGroupRole, strongerDesignRole, type DesignRole } from '../../lib/permissions';
 import type { z } from 'zod';
 import type { createDesignBodySchema, DesignListItem, DesignRecord, ResultSummary, updateDesignBodySchema } from '../../lib/api/contracts';
 import type { SessionUser } from '../session';
@@ -11,7 +11,7 @@ import { authorize, type DesignRow } from './access';
 import { requireDesignField, resultSummary, solveStored } from './solve';
 import { deleteAttachmentsOf } from './attachments';
 
-/** My designs and those shared with me, most recently changed first. */
+/** My designs, those shared with me and those of my groups, most recently changed first. */
 export async function listDesigns(u: SessionUser): Promise<DesignListItem[]> {
   const db = database();
   const own = await db.select().from(designs).where(eq(designs.ownerId, u.id));
@@ -20,10 +20,20 @@ export async function listDesigns(u: SessionUser): Promise<DesignListItem[]> {
     .from(designMembers)
     .innerJoin(designs, eq(designMembers.designId, designs.id))
     .where(eq(designMembers.userId, u.id));
-  const all: Array<{ row: DesignRow; role: DesignRole }> = [
-    ...own.map((row) => ({ row, role: 'owner' as const })),
-    ...memberRows.map((m) => ({ row: m.d, role: m.role })),
-  ];
+  const groupRows = await db
+    .select({ d: designs, role: groupMembers.role })
+    .from(groupMembers)
+    .innerJoin(designs, eq(designs.groupId, groupMembers.groupId))
+    .where(eq(groupMembers.userId, u.id));
+  const byId = new Map<string, { row: DesignRow; role: DesignRole }>();
+  for (const row of own) byId.set(row.id, { row, role: 'owner' });
+  for (const m of [...memberRows.map((x) => ({ row: x.d, role: x.role as DesignRole })), ...groupRows.map((x) => ({ row: x.d, role: designRoleOfGroupRole(x.role) }))]) {
+    const had = byId.get(m.row.id);
+    byId.set(m.row.id, { row: m.row, role: had ? strongerDesignRole(had.role, m.role) : m.role });
+  }
+  const all = [...byId.values()];
+  const groupIds = [...new Set(all.map((a) => a.row.groupId).filter((g): g is string => !!g))];
+  const groupNames = new Map(groupIds.length ? (await db.select({ id: groups.id, name: groups.name }).from(groups).where(inArray(groups.id, groupIds))).map((g) => [g.id, g.name]) : []);
   all.sort((a, b) => b.row.updatedAt.getTime() - a.row.updatedAt.getTime());
   // Each save stored its result summary with the revision; read it rather than solving every design again.
   const saved = new Map<string, ResultSummary | null>();
@@ -45,6 +55,8 @@ export async function listDesigns(u: SessionUser): Promise<DesignListItem[]> {
       updatedAt: row.updatedAt.toISOString(),
       loadedFrequency: summary?.loadedFrequency ?? null,
       tapTurns: summary?.tapTurns ?? null,
+      groupId: row.groupId,
+      groupName: row.groupId ? (groupNames.get(row.groupId) ?? null) : null,
     };
   });
 }
@@ -73,7 +85,7 @@ export async function createDesign(u: SessionUser, body: z.output<typeof createD
 
 export async function getDesign(u: SessionUser | null, id: string): Promise<DesignRecord & { updatedAt: string }> {
   const { row, role } = await authorize(id, u, 'read');
-  return { id: row.id, name: row.name, design: row.design, revision: row.revision, role, updatedAt: row.updatedAt.toISOString(), result: solveStored(row.design) };
+  return { id: row.id, name: row.name, design: row.design, revision: row.revision, role, updatedAt: row.updatedAt.toISOString(), groupId: row.groupId, result: solveStored(row.design) };
 }
 
 /** Saves a new revision; `revision` must be the latest, or nothing is written and the answer is 409 with the latest. */

@@ -16,7 +16,7 @@ export function hashToken(token: string): string {
   return createHash('sha256').update(token).digest('hex');
 }
 
-const tokenShape = /^[A-Za-z0-9_-]{16,64}$/;
+export const tokenShape = /^[A-Za-z0-9_-]{16,64}$/;
 
 export async function createInvitation(u: SessionUser, designId: string, b: z.output<typeof createInvitationBodySchema>, origin: string): Promise<Invitation> {
   const db = database();

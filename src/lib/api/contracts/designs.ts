@@ -21,6 +21,8 @@ export const designRecordSchema = z.object({
   role: designRoleSchema,
   /** present on GET */
   updatedAt: timestampSchema.optional(),
+  /** present on GET: the group whose members reach the design, or null */
+  groupId: z.string().nullable().optional(),
   /** null when the stored design no longer validates */
   result: resultSchema.nullable(),
 });
@@ -34,6 +36,9 @@ export const designListItemSchema = z.object({
   updatedAt: timestampSchema,
   loadedFrequency: z.number().nullable(),
   tapTurns: z.number().nullable(),
+  /** the design's group and its name, or null */
+  groupId: z.string().nullable(),
+  groupName: z.string().nullable(),
 });
 
 export const designListResponseSchema = z.object({ designs: z.array(designListItemSchema) });

@@ -17,3 +17,5 @@ export * from './solve';
 export * from './design-files';
 export * from './reports';
 export * from './winding';
+export * from './groups';
+export * from './reviews';
