@@ -208,6 +208,11 @@ const rows: Row[] = [
   { method: 'POST', file: 'api/v1/designs/[id]/winding/[sessionId]/adopt.ts', path: '/api/v1/designs/:id/winding/:sessionId/adopt', expect: write(200), prepare: () => windingOn('finished') },
   { method: 'GET', file: 'api/v1/shared/[token]/winding.ts', path: '/api/v1/shared/:shareToken/winding', expect: open(200) },
   { method: 'GET', file: 'designs/[id]/winding.astro', path: '/designs/:id/winding', expect: page },
+  // groups and first-light reviews: pages and design-side reads here; the group routes themselves in their own matrix
+  { method: 'GET', file: 'groups/index.astro', path: '/groups', expect: { ...signedIn(200), anonymous: 302 } },
+  { method: 'GET', file: 'designs/[id]/review.astro', path: '/designs/:id/review', expect: page },
+  { method: 'GET', file: 'api/v1/designs/[id]/reviews/index.ts', path: '/api/v1/designs/:id/reviews', expect: read },
+  { method: 'GET', file: 'api/v1/designs/[id]/group.ts', path: '/api/v1/designs/:id/group', expect: read },
   // account and public
   { method: 'GET', file: 'api/v1/me.ts', path: '/api/v1/me', expect: signedIn(200) },
   { method: 'PATCH', file: 'api/v1/me.ts', path: '/api/v1/me', expect: signedIn(200), body: () => ({ unitSystem: 'metric' }) },
@@ -243,6 +248,35 @@ const rows: Row[] = [
 /** Routes better-auth answers itself; its own tests and the account suites cover them. */
 const EXEMPT = new Set(['ALL api/auth/[...all].ts']);
 
+/**
+ * Routes whose callers are a group's people (site admin, group admin, supervisor, member, outsider, anonymous)
+ * rather than a design's: each is called by all six in the named test file's own table.
+ */
+const GROUP_MATRIX: Record<string, string[]> = {
+  'tests/api/groups.test.ts': [
+    'GET api/v1/groups/index.ts',
+    'POST api/v1/groups/index.ts',
+    'GET api/v1/groups/[groupId]/index.ts',
+    'PATCH api/v1/groups/[groupId]/index.ts',
+    'DELETE api/v1/groups/[groupId]/index.ts',
+    'GET api/v1/groups/[groupId]/invitations/index.ts',
+    'POST api/v1/groups/[groupId]/invitations/index.ts',
+    'DELETE api/v1/groups/[groupId]/invitations/[invitationId].ts',
+    'PATCH api/v1/groups/[groupId]/members/[userId].ts',
+    'DELETE api/v1/groups/[groupId]/members/[userId].ts',
+    'POST api/v1/groups/[groupId]/transfer.ts',
+    'GET api/v1/group-invitations/[token].ts',
+    'POST api/v1/group-invitations/[token]/accept.ts',
+    'PUT api/v1/designs/[id]/group.ts',
+    'GET group-invitations/[token].astro',
+  ],
+  'tests/api/reviews.test.ts': [
+    'POST api/v1/designs/[id]/reviews/index.ts',
+    'GET api/v1/designs/[id]/reviews/[reviewId]/index.ts',
+    'POST api/v1/designs/[id]/reviews/[reviewId]/decision.ts',
+  ],
+};
+
 function routeFiles(): string[] {
   const pages = resolve(import.meta.dirname, '../../src/pages');
   const out: string[] = [];
@@ -263,7 +297,16 @@ function routeFiles(): string[] {
 
 describe('the access matrix covers every route', () => {
   it('has a row for each route file and method, and no row for a route that does not exist', () => {
-    const have = new Set(rows.map((r) => `${r.method} ${r.file}`));
+    const have = new Set([...rows.map((r) => `${r.method} ${r.file}`), ...Object.values(GROUP_MATRIX).flat()]);
+    for (const [file, routes] of Object.entries(GROUP_MATRIX)) {
+      const text = readFileSync(resolve(import.meta.dirname, '../..', file), 'utf8');
+      // that file calls each route's path with every kind of caller
+      expect(text).toMatch(/everyone/);
+      for (const r of routes) {
+        const stem = r.split(' ')[1].replace(/\.(ts|astro)$/, '').replace(/\/index$/, '').split('/').filter((p) => !p.startsWith('['));
+        expect(text, `${file} calls ${r}`).toContain(stem[stem.length - 1]);
+      }
+    }
     const routes = routeFiles().filter((r) => !EXEMPT.has(r));
     expect(routes.filter((r) => !have.has(r)), 'routes without a row in the access matrix').toEqual([]);
     expect([...have].filter((r) => !routes.includes(r)), 'rows for routes the app does not have').toEqual([]);

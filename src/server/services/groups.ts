@@ -186,6 +186,10 @@ export async function acceptGroupInvitation(u: SessionUser, token: string): Prom
   const { inv, group } = await openGroupInvitation(token);
   const existing = await membership(group.id, u.id);
   if (existing?.role === 'admin') throw new ApiError('conflict', 'You are this group’s admin already.');
+  // The link is for the person it was mailed to: a forwarded link cannot be used by another account.
+  if (u.email.trim().toLowerCase() !== inv.email.trim().toLowerCase()) {
+    throw new ApiError('forbidden', 'This invitation was sent to another e-mail address. Sign in with the address it was sent to, or ask the group’s admin to invite this account.');
+  }
   const done = await database().transaction(async (tx) => {
     const claimed = await tx
       .update(groupInvitations)
