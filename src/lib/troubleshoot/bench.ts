@@ -10,6 +10,20 @@ export const MEASUREMENT_KINDS = {
   coupling: { label: 'Coupling coefficient k', unit: '1', instrument: 'line-frequency drive, M = V/(ωI)', bench: 'coupling' },
   'spark-length': { label: 'Spark length (straight line to a grounded target)', unit: 'm', instrument: 'tape measure', bench: 'sparkLength' },
   'tap-position': { label: 'Best tap found', unit: 'turns', instrument: 'tap sweep at low power', bench: 'tapTurns' },
+  // solid-state coils (common practice of bridge-driven coils)
+  'primary-ring-frequency': {
+    label: 'Primary ring-down frequency, bridge disconnected',
+    unit: 'Hz',
+    instrument: 'pulse into the tank, scope on a current transformer',
+    bench: 'primaryRingFrequency',
+  },
+  'peak-primary-current': {
+    label: 'Peak primary current at the end of the on-time',
+    unit: 'A',
+    instrument: 'current transformer and scope',
+    bench: 'peakPrimaryCurrent',
+  },
+  'trip-setting': { label: 'Over-current trip setting', unit: 'A', instrument: 'controller setting, checked with a current transformer', bench: 'tripSetting' },
 } as const satisfies Record<string, { label: string; unit: string; instrument: string; bench: keyof BenchValues }>;
 
 export type MeasurementKind = keyof typeof MEASUREMENT_KINDS;
@@ -33,6 +47,12 @@ export function predictionFor(kind: MeasurementKind, result: Result | null): num
       return result.supply?.sparkLengthEstimate ?? null;
     case 'tap-position':
       return result.tuning?.tapTurns ?? null;
+    case 'primary-ring-frequency':
+      return result.drive?.primaryFrequency ?? null;
+    case 'peak-primary-current':
+      return result.drive?.peakPrimaryCurrent ?? null;
+    case 'trip-setting':
+      return result.drive?.currentLimit ?? null;
   }
 }
 

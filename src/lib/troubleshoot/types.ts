@@ -30,6 +30,9 @@ export interface BenchValues {
   coupling?: number;
   sparkLength?: number;
   tapTurns?: number;
+  primaryRingFrequency?: number;
+  peakPrimaryCurrent?: number;
+  tripSetting?: number;
 }
 
 export interface TroubleshootContext {

@@ -11,6 +11,9 @@ export const MEASUREMENT_RANGES: Record<MeasurementKind, { max: number; hint: st
   coupling: { max: 0.999, hint: 'k as a number between 0 and 1' },
   'spark-length': { max: 100, hint: 'in metres' },
   'tap-position': { max: 1000, hint: 'turns from the inner end' },
+  'primary-ring-frequency': { max: 100e6, hint: 'in hertz, e.g. 95000 for 95 kHz' },
+  'peak-primary-current': { max: 1e5, hint: 'in amperes, e.g. 400 for 400 A' },
+  'trip-setting': { max: 1e5, hint: 'in amperes, e.g. 450 for 450 A' },
 };
 
 export const measurementKindSchema = z.enum(MEASUREMENT_KIND_IDS, {
