@@ -49,6 +49,19 @@ export interface ExchangeCurve {
   k: number;
 }
 
+export interface BurstCurve {
+  /** the burst as simulated: time, primary current, secondary top voltage */
+  rows: Array<{ t: number; current: number; voltage: number }>;
+  /** the peak primary current reached by each on-time up to the design's: the running peak of |current| */
+  peaks: Array<{ onTime: number; peak: number }>;
+  onTime: number;
+  peakPrimaryCurrent: number;
+  currentLimit: number | null;
+  switchPeakCurrent: number | null;
+  timeToCurrentLimit: number | null;
+  topology: 'dual-resonant' | 'single-resonant';
+}
+
 export type SolverRequest =
   | { type: 'solve'; input: unknown }
   | { type: 'sweep'; input: unknown; sweep: SweepRequest }
@@ -65,6 +78,8 @@ export interface ChartsData {
   tuning: TuningCurve | null;
   coupling: CouplingCurve | null;
   exchange: ExchangeCurve | null;
+  /** solid-state supplies: the burst and the peak current against on-time */
+  burst: BurstCurve | null;
 }
 
 export type SolverReply =

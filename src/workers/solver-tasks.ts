@@ -11,6 +11,7 @@ import {
   type Result,
 } from '../solver';
 import type {
+  BurstCurve,
   ChartsData,
   CouplingCurve,
   ExchangeCurve,
@@ -79,6 +80,34 @@ export function exchangeCurve(r: Result): ExchangeCurve | null {
   return { rows, firstPrimaryMinimum: e.firstPrimaryMinimum, residualPrimaryEnergy: e.residualPrimaryEnergy, k };
 }
 
+const PEAK_POINTS = 200;
+
+/** The burst of a solid-state design for its charts: the waveform, and the running peak of |primary current| against time. */
+export function burstCurve(r: Result): BurstCurve | null {
+  const d = r.drive;
+  if (!d || d.waveform.time.length === 0) return null;
+  const w = d.waveform;
+  const rows = w.time.map((t, i) => ({ t, current: w.primaryCurrent[i], voltage: w.secondaryVoltage[i] }));
+  // the burst is the same up to any shorter on-time, so the running peak is the peak at that on-time
+  const peaks: BurstCurve['peaks'] = [];
+  const every = Math.max(1, Math.floor(rows.length / PEAK_POINTS));
+  let peak = 0;
+  for (let i = 0; i < rows.length; i++) {
+    peak = Math.max(peak, Math.abs(rows[i].current));
+    if (i % every === 0 || i === rows.length - 1) peaks.push({ onTime: rows[i].t, peak });
+  }
+  return {
+    rows,
+    peaks,
+    onTime: d.onTime,
+    peakPrimaryCurrent: d.peakPrimaryCurrent,
+    currentLimit: d.currentLimit,
+    switchPeakCurrent: d.switchPeakCurrent,
+    timeToCurrentLimit: d.timeToCurrentLimit,
+    topology: d.topology,
+  };
+}
+
 export function sweepData(d: DesignSI, req: SweepRequest): SweepData {
   const s = sweep(d, req.path, req.from, req.to, req.points, req.series);
   const rows = s.values.map((x, i) => {
@@ -127,7 +156,7 @@ export function runRequest(id: number, request: SolverRequest, now: () => number
         return { id, ok: true, reply: { type: 'sweep', data: sweepData(d, request.sweep) } };
       case 'charts': {
         const result = solve(d);
-        const data: ChartsData = { tuning: tuningCurve(d, result), coupling: couplingCurve(d, result), exchange: exchangeCurve(result) };
+        const data: ChartsData = { tuning: tuningCurve(d, result), coupling: couplingCurve(d, result), exchange: exchangeCurve(result), burst: burstCurve(result) };
         return { id, ok: true, reply: { type: 'charts', data } };
       }
       case 'goal':
