@@ -1,5 +1,5 @@
-import { simulateBurst } from '../drive/burst';
-import type { BurstCircuitSI, DriveSettingsSI } from '../drive/types';
+import { simulateBurst } from './burst-interim';
+import type { BurstCircuitSI, DriveSettingsSI } from './burst-interim';
 import { capacitorEnergy } from '../tank/energy';
 import type { DriveBankResult, DriveResult, SolidStateSupplySI, TankSI } from '../types';
 
