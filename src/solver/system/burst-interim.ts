@@ -6,49 +6,7 @@
  * applies +V while the feedback current (i1 with a tank, i2 without) is ≥ 0 and −V while it is < 0, sampled
  * at the start of each step, until the on-time or the current limit.
  */
-export type DriveTopology = 'dual-resonant' | 'single-resonant';
-export type BridgeKind = 'full' | 'half';
-
-export interface DriveSettingsSI {
-  topology: DriveTopology;
-  bridge: BridgeKind;
-  busVoltage: number;
-  onTime: number;
-  repetitionRate: number;
-  switchPeakCurrent: number | null;
-  currentLimit: number | null;
-  busCapacitance: number | null;
-  tuningRatio: number;
-}
-
-export interface BurstCircuitSI {
-  L1: number;
-  C1: number | null;
-  R1: number;
-  L2: number;
-  C2: number;
-  R2: number;
-  M: number;
-}
-
-export interface BurstResult {
-  primaryFrequency: number;
-  surgeImpedance: number | null;
-  peakPrimaryCurrent: number;
-  timeToCurrentLimit: number | null;
-  capacitorPeakVoltage: number | null;
-  capacitorRmsCurrent: number | null;
-  secondaryPeakVoltage: number;
-  baseCurrentPeak: number;
-  burstEnergy: number;
-  averagePower: number;
-  dutyCycle: number;
-  busDroop: number | null;
-  switchingInstants: number[];
-  energyBalance: { drawn: number; stored: number; dissipated: number };
-  waveform: { time: number[]; primaryCurrent: number[]; secondaryVoltage: number[] };
-  stepsPerPeriod: number;
-}
+import type { BurstCircuitSI, BurstResult, DriveSettingsSI } from '../drive/types';
 
 const STEPS_PER_PERIOD = 200;
 const MAX_SAMPLES = 4000;
@@ -58,7 +16,7 @@ export function simulateBurst(s: DriveSettingsSI, c: BurstCircuitSI): BurstResul
   const tank = c.C1 !== null;
   const f = tank ? 1 / (2 * Math.PI * Math.sqrt(c.L1 * c.C1!)) : 1 / (2 * Math.PI * Math.sqrt(c.L2 * c.C2));
   const dt = 1 / (f * STEPS_PER_PERIOD);
-  const limit = Math.min(s.currentLimit ?? Infinity, s.switchPeakCurrent ?? Infinity);
+  const limit = s.currentLimit ?? s.switchPeakCurrent ?? Infinity;
   const det = c.L1 * c.L2 - c.M * c.M;
   const inv1 = tank ? 1 / c.C1! : 0;
   const deriv = (x: number[], v: number): number[] => {
@@ -126,7 +84,7 @@ export function simulateBurst(s: DriveSettingsSI, c: BurstCircuitSI): BurstResul
   const stored = 0.5 * c.L1 * x[1] ** 2 + c.M * x[1] * x[3] + 0.5 * c.L2 * x[3] ** 2 + (tank ? (0.5 * x[0] ** 2) / c.C1! : 0) + (0.5 * x[2] ** 2) / c.C2;
   const duration = t;
   const busDroop =
-    s.busCapacitance === null ? null : s.busVoltage - Math.sqrt(Math.max(0, s.busVoltage ** 2 - (2 * Math.max(0, drawn)) / s.busCapacitance));
+    s.busCapacitance === null ? null : Math.max(0, drawn) / (s.busCapacitance * s.busVoltage);
   return {
     primaryFrequency: f,
     surgeImpedance: tank ? Math.sqrt(c.L1 / c.C1!) : null,
@@ -141,7 +99,7 @@ export function simulateBurst(s: DriveSettingsSI, c: BurstCircuitSI): BurstResul
     dutyCycle: duration * s.repetitionRate,
     busDroop,
     switchingInstants: switching,
-    energyBalance: { drawn, stored, dissipated },
+    energyBalance: { drawn, stored, dissipated, relativeError: drawn === 0 ? 0 : Math.abs(drawn - stored - dissipated) / Math.abs(drawn) },
     waveform: { time, primaryCurrent, secondaryVoltage },
     stepsPerPeriod: STEPS_PER_PERIOD,
   };

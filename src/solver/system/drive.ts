@@ -1,5 +1,5 @@
 import { simulateBurst } from './burst-interim';
-import type { BurstCircuitSI, DriveSettingsSI } from './burst-interim';
+import type { BurstCircuitSI, DriveSettingsSI } from '../drive/types';
 import { capacitorEnergy } from '../tank/energy';
 import type { DriveBankResult, DriveResult, SolidStateSupplySI, TankSI } from '../types';
 
@@ -84,11 +84,6 @@ export function resampleWaveform(w: { time: number[]; primaryCurrent: number[]; 
 export function evaluateDrive(supply: SolidStateSupplySI, circuit: BurstCircuitSI, tank: TankSI | null, targetFrequency: number | null): DriveResult {
   const settings = driveSettings(supply);
   const b = simulateBurst(settings, circuit);
-  const limits = [
-    supply.currentLimit === null ? null : { by: 'currentLimit' as const, at: supply.currentLimit },
-    supply.switchPeakCurrent === null ? null : { by: 'switchPeakCurrent' as const, at: supply.switchPeakCurrent },
-  ].filter((x) => x !== null);
-  limits.sort((a, c) => a.at - c.at);
   const dual = supply.topology === 'dual-resonant' && circuit.C1 !== null;
   const vcap = dual ? b.capacitorPeakVoltage : null;
   const icap = dual ? b.capacitorRmsCurrent : null;
@@ -105,7 +100,8 @@ export function evaluateDrive(supply: SolidStateSupplySI, circuit: BurstCircuitS
     frequencyRatio: targetFrequency === null ? null : b.primaryFrequency / targetFrequency,
     peakPrimaryCurrent: b.peakPrimaryCurrent,
     timeToCurrentLimit: b.timeToCurrentLimit,
-    limitBy: b.timeToCurrentLimit === null || limits.length === 0 ? null : limits[0].by,
+    // the trip when one is set, otherwise the switches' rating (the drive family's rule)
+    limitBy: b.timeToCurrentLimit === null ? null : supply.currentLimit !== null ? 'currentLimit' : 'switchPeakCurrent',
     capacitorPeakVoltage: vcap,
     capacitorRmsCurrent: icap,
     capacitorPeakEnergy: vcap === null || circuit.C1 === null ? null : capacitorEnergy(circuit.C1, vcap),
