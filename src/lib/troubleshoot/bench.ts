@@ -23,7 +23,7 @@ export const MEASUREMENT_KINDS = {
     instrument: 'current transformer and scope',
     bench: 'peakPrimaryCurrent',
   },
-  'trip-setting': { label: 'Over-current trip setting', unit: 'A', instrument: 'controller setting, checked with a current transformer', bench: 'tripSetting' },
+  'trip-setting': { label: 'Trip setting as measured', unit: 'A', instrument: 'controller setting, checked with a current transformer', bench: 'tripSetting' },
 } as const satisfies Record<string, { label: string; unit: string; instrument: string; bench: keyof BenchValues }>;
 
 export type MeasurementKind = keyof typeof MEASUREMENT_KINDS;
