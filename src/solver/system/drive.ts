@@ -1,4 +1,4 @@
-import { simulateBurst } from './burst-interim';
+import { simulateBurst } from '../drive/burst';
 import type { BurstCircuitSI, DriveSettingsSI } from '../drive/types';
 import { capacitorEnergy } from '../tank/energy';
 import type { DriveBankResult, DriveResult, SolidStateSupplySI, TankSI } from '../types';
