@@ -83,3 +83,5 @@ export {
   type EnergyExchangeOptions,
   type EnergyExchangeSeries,
 } from './response/exchange';
+export { evaluateDrive, driveSettings, bankStress, DRIVE_CAUTION } from './system/drive';
+export { onTimeForTargetPeak, tankForTargetPeak, tapForTuningRatio } from './system/drive-goals';

@@ -4,12 +4,21 @@ import type { DesignIssue, DesignSI, Result, SweepSeriesName } from '../solver';
 export type Goal =
   | { kind: 'frequency'; hz: number }
   | { kind: 'tap'; turns: number }
-  | { kind: 'coupling'; k: number };
+  | { kind: 'coupling'; k: number }
+  /** solid-state: the on-time for a target peak primary current, A */
+  | { kind: 'onTime'; peak: number }
+  /** solid-state: the tank capacitance for a target peak primary current at the design's on-time, A */
+  | { kind: 'tankForCurrent'; peak: number }
+  /** dual-resonant: the tap for a primary to secondary frequency ratio */
+  | { kind: 'tapRatio'; ratio: number };
 
 export type GoalAnswer =
   | { kind: 'frequency'; turns: number; windingLength: number }
   | { kind: 'tap'; capacitance: number }
-  | { kind: 'coupling'; elevation: number };
+  | { kind: 'coupling'; elevation: number }
+  | { kind: 'onTime'; onTime: number }
+  | { kind: 'tankForCurrent'; capacitance: number; surgeImpedance: number }
+  | { kind: 'tapRatio'; tapTurns: number };
 
 export interface SweepRequest {
   path: string;

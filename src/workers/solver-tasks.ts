@@ -2,7 +2,10 @@ import { parseDesign } from '../lib/design';
 import {
   energyExchange,
   elevationForCoupling,
+  onTimeForTargetPeak,
   solve,
+  tankForTargetPeak,
+  tapForTuningRatio,
   sweep,
   tankCapacitanceForTap,
   turnsForFrequency,
@@ -131,6 +134,18 @@ export function goalAnswer(d: DesignSI, goal: Goal): GoalAnswer | null {
     case 'coupling': {
       const e = elevationForCoupling(d, goal.k);
       return e === null ? null : { kind: 'coupling', elevation: e };
+    }
+    case 'onTime': {
+      const a = onTimeForTargetPeak(d, goal.peak);
+      return a.ok ? { kind: 'onTime', onTime: a.value } : null;
+    }
+    case 'tankForCurrent': {
+      const a = tankForTargetPeak(d, goal.peak);
+      return a.ok ? { kind: 'tankForCurrent', ...a.value } : null;
+    }
+    case 'tapRatio': {
+      const a = tapForTuningRatio(d, goal.ratio);
+      return a.ok ? { kind: 'tapRatio', tapTurns: a.value } : null;
     }
   }
 }

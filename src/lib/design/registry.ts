@@ -533,7 +533,7 @@ export const DESIGN_FIELDS = [
     hint: `e.g. 0.9; empty for ${DEFAULT_TUNING_RATIO}`,
     bounds: { min: 0.5, max: 1.5, minInclusive: true, label: 'between 0.5 and 1.5' },
     optional: true,
-    default: '',
+    default: String(DEFAULT_TUNING_RATIO),
   },
   {
     path: 'tuning.streamerCapacitance',
