@@ -88,6 +88,11 @@ for (const s of sections) {
   runElevationBench();
 }
 
+{
+  const { runBurstBench } = await import('./bench/burst');
+  runBurstBench();
+}
+
 // The page-weight and keystroke figures need a build to serve.
 {
   const { existsSync } = await import('node:fs');

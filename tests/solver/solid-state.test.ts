@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { exampleDesigns, parseDesign } from '~/lib/design';
-import { solve, type DesignSI } from '~/solver';
+import { onTimeForTargetPeak, solve, tankForTargetPeak, tapForTuningRatio, type DesignSI } from '~/solver';
 import { assertClose } from '../helpers/assertClose';
 
 function si(input: unknown): DesignSI {
@@ -98,5 +98,38 @@ describe('solve() wires the burst for a dual-resonant coil', () => {
     expect(bad({ onTime: '3 kg' })).toContain('supply.onTime');
     expect(bad({ bridge: 'quarter' })).toContain('supply.bridge');
     expect(bad({ tuningRatio: 3 })).toContain('supply.tuningRatio');
+  });
+});
+
+describe('goal-first for a bridge-driven coil', () => {
+  const d = si(demo);
+  const r = solve(d);
+  it('the on-time for a target peak current gives that peak when put back into the design', () => {
+    const a = onTimeForTargetPeak(d, 400);
+    expect(a.ok).toBe(true);
+    if (!a.ok) return;
+    expect(a.value).toBeLessThan(50e-6);
+    const back = solve(si({ ...demo, supply: { ...demo.supply, onTime: a.value, currentLimit: undefined } }));
+    assertClose(back.drive!.peakPrimaryCurrent, 400, 5e-3, 'peak at the found on-time');
+  });
+  it('the tank capacitance for a target peak at the design’s on-time: more current needs more capacitance (lower surge impedance)', () => {
+    const now = r.drive!.peakPrimaryCurrent;
+    const up = tankForTargetPeak(d, 1.2 * now);
+    const down = tankForTargetPeak(d, 0.8 * now);
+    expect(up.ok && down.ok).toBe(true);
+    if (!up.ok || !down.ok) return;
+    expect(up.value.capacitance).toBeGreaterThan(r.tank!.capacitance);
+    expect(down.value.capacitance).toBeLessThan(r.tank!.capacitance);
+    expect(up.value.surgeImpedance).toBeLessThan(r.drive!.surgeImpedance!);
+  });
+  it('the tap for a tuning ratio is the tap the solver sets for that ratio', () => {
+    const a = tapForTuningRatio(d, 0.85);
+    expect(a.ok).toBe(true);
+    if (!a.ok) return;
+    const at = solve(si({ ...demo, supply: { ...demo.supply, tuningRatio: 0.85 } }));
+    assertClose(a.value, at.tuning!.tapTurns!, 1e-6, 'tap');
+    expect(a.value).toBeGreaterThan(r.tuning!.tapTurns!); // lower frequency: more turns
+    expect(tapForTuningRatio(si(exampleDesigns[0].design), 0.9).ok).toBe(true);
+    expect(onTimeForTargetPeak(si(exampleDesigns[0].design), 100).ok).toBe(false);
   });
 });
