@@ -39,6 +39,8 @@ export interface TuningCurve {
   secondaryFrequency: number;
   /** with the streamer allowance */
   targetFrequency: number;
+  /** what the tap aims at: targetFrequency, times the tuning ratio of a dual-resonant bridge coil */
+  primaryTargetFrequency?: number;
   tapTurns: number | null;
   tapLow: number | null;
   tapHigh: number | null;

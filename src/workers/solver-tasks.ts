@@ -48,6 +48,7 @@ export function tuningCurve(d: DesignSI, r: Result): TuningCurve | null {
     rows,
     secondaryFrequency: r.system.resonantFrequency,
     targetFrequency: r.tuning.targetFrequency,
+    primaryTargetFrequency: r.tuning.primaryTargetFrequency,
     tapTurns: r.tuning.tapTurns,
     tapLow: r.uncertainty?.tapTurns?.low ?? null,
     tapHigh: r.uncertainty?.tapTurns?.high ?? null,

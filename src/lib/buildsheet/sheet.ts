@@ -175,7 +175,7 @@ export function buildSheet(design: DesignSI, result: Result, options: BuildSheet
           conductorToBuy: result.primary.conductorLength * (1 + options.margin),
           tapTurns: result.tuning?.tapTurns ?? null,
           conductorLengthAtTap: result.primary.conductorLengthAtTap,
-          targetFrequency: result.tuning?.targetFrequency ?? null,
+          targetFrequency: result.tuning?.primaryTargetFrequency ?? result.tuning?.targetFrequency ?? null,
           calibrated: calibratedTuning(design, result, calibration),
         }
       : null;
