@@ -54,7 +54,7 @@ export interface BurstResult {
   primaryFrequency: number;
   /** √(L1/C1), null for single-resonant */
   surgeImpedance: number | null;
-  /** |i1| peak up to the end of onTime */
+  /** |i1| peak up to the end of onTime (the trip is reported in timeToCurrentLimit, not modelled: the burst runs on to onTime) */
   peakPrimaryCurrent: number;
   /** first time |i1| reaches currentLimit ?? switchPeakCurrent; null if not within onTime */
   timeToCurrentLimit: number | null;
@@ -64,7 +64,7 @@ export interface BurstResult {
   capacitorRmsCurrent: number | null;
   /** |v_C2| peak over the burst (unloaded upper bound) */
   secondaryPeakVoltage: number;
-  /** |i2| peak (the secondary base current) */
+  /** |i2| peak (the secondary base current; for single-resonant the current the feedback follows) */
   baseCurrentPeak: number;
   /** ∫ v_bridge·i1 dt over the burst, drawn from the bus */
   burstEnergy: number;
