@@ -384,7 +384,7 @@ export interface DriveResult {
   primaryFrequency: number;
   /** primaryFrequency over the tuning target (the secondary with its streamer allowance) */
   frequencyRatio: number | null;
-  /** primary current at the end of the burst (the on-time, or the trip) */
+  /** largest primary current up to the end of the on-time (the burst is simulated to the on-time even past a trip) */
   peakPrimaryCurrent: number;
   /** when the current limit (or the switches' rating) is reached; null if not within the on-time */
   timeToCurrentLimit: number | null;

@@ -49,7 +49,7 @@ export function DrivePanel({ result: r, system }: Props) {
           system={system}
           figure="timeToCurrentLimit"
           value={d.timeToCurrentLimit === null ? (d.currentLimit === null && d.switchPeakCurrent === null ? 'no limit given' : 'not reached in the on-time') : q(d.timeToCurrentLimit, 'time', { digits: 3 })}
-          note={d.timeToCurrentLimit !== null ? <>The {limit} ends the burst before the on-time.</> : undefined}
+          note={d.timeToCurrentLimit !== null ? <>The {limit} is reached before the on-time ends: the controller would cut the burst short there; the figures here run on to the full on-time. Shorten the on-time.</> : undefined}
         />
         {dual && (
           <>
