@@ -83,6 +83,8 @@ export {
   type EnergyExchangeOptions,
   type EnergyExchangeSeries,
 } from './response/exchange';
+export { evaluateDrive, driveSettings, bankStress, DRIVE_CAUTION } from './system/drive';
+export { onTimeForTargetPeak, tankForTargetPeak, tapForTuningRatio } from './system/drive-goals';
 
 // Bridge-driven (solid-state) coils: the burst simulation and its goal-first inverses.
 export * from './drive';

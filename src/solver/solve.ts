@@ -3,6 +3,7 @@ import { acResistanceRoundWire } from './wire/resistance';
 import type {
   CouplingResult,
   DesignSI,
+  DriveResult,
   PrimaryResult,
   ResponseResult,
   Result,
@@ -33,6 +34,7 @@ import { elevationForCoupling } from './inverse';
 import { evaluateUncertainty } from './uncertainty';
 import { evaluateFieldModel, FIELD_MODEL_NOTE } from './field/model';
 import { DEFAULT_FORMER } from './field/former';
+import { evaluateDrive } from './system/drive';
 
 export const LUMPED_MODEL_NOTE =
   'Lumped model: the secondary is its low-frequency inductance resonating with its Medhurst self-capacitance ' +
@@ -130,7 +132,9 @@ export function solve(design: DesignSI): Result {
   if (p && pv && sv && tank && system) {
     const streamer = design.tuning.streamerCapacitance;
     const targetFrequency = field ? field.frequencyWithTopCapacitance(streamer) : resonantFrequencyLC(sv.inductance, system.totalCapacitance + streamer);
-    const requiredInductance = inductanceForResonance(targetFrequency, tank.capacitance);
+    // a dual-resonant bridge coil tunes its primary to a ratio of the secondary (CONTRACT datums)
+    const primaryTargetFrequency = targetFrequency * tapRatio(design);
+    const requiredInductance = inductanceForResonance(primaryTargetFrequency, tank.capacitance);
     const tap = attempt('The tap', 'primary.turns', warnings, () =>
       solveTap((t) => primaryInductanceAtTap(p, t), requiredInductance, minimumTap(p), p.turns),
     ) ?? { tapTurns: null, inRange: false };
@@ -142,6 +146,7 @@ export function solve(design: DesignSI): Result {
       streamerCapacitance: streamer,
       primaryFrequencyAllTurns,
       requiredInductance,
+      primaryTargetFrequency,
     };
     if (!tap.inRange) {
       const needMore = requiredInductance > pv.inductance;
@@ -151,8 +156,8 @@ export function solve(design: DesignSI): Result {
           needMore ? 'primary.turns' : 'tank',
           needMore
             ? `With every turn in circuit the primary and tank resonate at ${kHz(primaryFrequencyAllTurns)}, above the ` +
-                `target ${kHz(targetFrequency)}: add primary turns or tank capacitance.`
-            : `Even a quarter turn is too much inductance to reach ${kHz(targetFrequency)} with this tank: ` +
+                `target ${kHz(primaryTargetFrequency)}: add primary turns or tank capacitance.`
+            : `Even a quarter turn is too much inductance to reach ${kHz(primaryTargetFrequency)} with this tank: ` +
                 'use less tank capacitance or a smaller primary.',
         ),
       );
@@ -213,6 +218,40 @@ export function solve(design: DesignSI): Result {
 
   const supply: SupplyResult | null = design.supply ? evaluateSupply(design.supply, tank?.capacitance ?? null) : null;
 
+  let drive: DriveResult | null = null;
+  const ss = design.supply?.kind === 'solid-state' ? design.supply : null;
+  if (ss && p && pv && cv && sv && system && secondary) {
+    const dual = ss.topology === 'dual-resonant';
+    const streamer = design.tuning.streamerCapacitance;
+    const pair = field
+      ? field.withTopCapacitance(streamer)
+      : { effectiveInductance: sv.inductance, effectiveCapacitance: system.totalCapacitance + streamer };
+    const L1 = dual ? primary?.inductanceAtTap ?? null : pv.inductance;
+    const M = dual ? coupling?.mutualInductanceAtTap ?? null : cv.mutualInductance;
+    const length = dual ? primary?.conductorLengthAtTap ?? null : pv.conductorLength;
+    const C1 = dual ? tank?.capacitance ?? null : null;
+    const target = tuning?.targetFrequency ?? resonantFrequencyLC(pair.effectiveInductance, pair.effectiveCapacitance);
+    if (L1 !== null && M !== null && length !== null && (!dual || C1 !== null)) {
+      const fDrive = C1 !== null ? resonantFrequencyLC(L1, C1) : target;
+      drive = attempt('The burst', 'supply', warnings, () =>
+        evaluateDrive(
+          ss,
+          {
+            L1,
+            C1,
+            R1: acResistanceRoundWire(length, p.conductorDiameter, fDrive),
+            L2: pair.effectiveInductance,
+            C2: pair.effectiveCapacitance,
+            R2: secondary!.acResistance ?? secondary!.dcResistance,
+            M,
+          },
+          dual ? design.tank : null,
+          target,
+        ),
+      );
+    }
+  }
+
   let uncertainty: UncertaintyResult | null = null;
   if (sv && system) {
     uncertainty = attempt('The uncertainty band', 'secondary', warnings, () =>
@@ -222,6 +261,7 @@ export function solve(design: DesignSI): Result {
         toploadCapacitance: tl?.capacitance ?? 0,
         streamerCapacitance: design.tuning.streamerCapacitance,
         tankCapacitance: tank?.capacitance ?? null,
+        tapFrequencyRatio: tapRatio(design),
         field: field
           ? {
               ...field.withTopCapacitance(design.tuning.streamerCapacitance),
@@ -244,15 +284,22 @@ export function solve(design: DesignSI): Result {
     supply,
     response,
     uncertainty,
+    drive,
     warnings,
   };
   warnings.push(...designWarnings(design, result));
 
   const clean: Result = { ...result, warnings };
-  for (const key of ['secondary', 'topload', 'system', 'primary', 'coupling', 'tuning', 'tank', 'supply', 'response', 'uncertainty'] as const) {
+  for (const key of ['secondary', 'topload', 'system', 'primary', 'coupling', 'tuning', 'tank', 'supply', 'response', 'uncertainty', 'drive'] as const) {
     (clean as unknown as Record<string, unknown>)[key] = sanitizeNumbers(result[key], warnings, key);
   }
   return clean;
+}
+
+/** The tap's frequency over the tuning target: the supply's tuning ratio for a dual-resonant bridge, otherwise 1. */
+export function tapRatio(design: DesignSI): number {
+  const u = design.supply;
+  return u?.kind === 'solid-state' && u.topology === 'dual-resonant' ? u.tuningRatio : 1;
 }
 
 function kHz(f: number): string {

@@ -95,6 +95,8 @@ export interface TankBankSI {
   unitVoltage: number;
   series: number;
   parallel: number;
+  /** each capacitor's RMS current rating; null when not given */
+  unitRmsCurrent?: number | null;
 }
 
 export type TankSI = TankSingleSI | TankBankSI;
@@ -110,9 +112,27 @@ export interface TransformerSupplySI {
   breakRate: number | null;
 }
 
+export type DriveTopologySI = 'dual-resonant' | 'single-resonant';
+export type BridgeKindSI = 'full' | 'half';
+
 export interface SolidStateSupplySI {
   kind: 'solid-state';
   busVoltage: number;
+  topology: DriveTopologySI;
+  bridge: BridgeKindSI;
+  /** interrupter on-time: length of each burst */
+  onTime: number;
+  /** bursts per second */
+  repetitionRate: number;
+  /** the switches' pulsed current rating; null when not given */
+  switchPeakCurrent: number | null;
+  /** over-current trip; null when not given */
+  currentLimit: number | null;
+  busCapacitance: number | null;
+  /** primary frequency over the secondary's loaded frequency */
+  tuningRatio: number;
+  /** fields the design left out that took their stated defaults, by name (e.g. "onTime") */
+  defaulted: string[];
 }
 
 export type SupplySI = TransformerSupplySI | SolidStateSupplySI;
@@ -245,6 +265,8 @@ export interface TuningResult {
   primaryFrequencyAllTurns: number;
   /** inductance the primary needs at the tap */
   requiredInductance: number;
+  /** what the tap tunes primary + tank to: targetFrequency, times the tuning ratio for a dual-resonant bridge coil */
+  primaryTargetFrequency: number;
 }
 
 export interface BleederResult {
@@ -327,6 +349,72 @@ export interface UncertaintyResult {
   method: string;
 }
 
+/** The capacitor bank checked against the burst: each capacitor's share of the peak voltage and of the RMS current. */
+export interface DriveBankResult {
+  /** peak voltage across each capacitor of a string (the tank's peak over the capacitors in series) */
+  unitPeakVoltage: number;
+  /** DC rating of each capacitor */
+  unitVoltage: number;
+  /** unit rating over the unit's peak voltage; below 1 the rating is exceeded */
+  voltageMargin: number;
+  /** RMS current each string (and so each capacitor in it) carries: the tank's over the strings in parallel */
+  stringRmsCurrent: number;
+  /** each capacitor's RMS current rating; null when not given */
+  unitRmsCurrent: number | null;
+  /** rating over the string's RMS current; null without a rating */
+  currentMargin: number | null;
+  /** peak current through each string */
+  stringPeakCurrent: number;
+  series: number;
+  parallel: number;
+}
+
+/** A bridge-driven (solid-state) supply simulated through one burst. */
+export interface DriveResult {
+  topology: DriveTopologySI;
+  bridge: BridgeKindSI;
+  busVoltage: number;
+  onTime: number;
+  repetitionRate: number;
+  currentLimit: number | null;
+  switchPeakCurrent: number | null;
+  /** √(L/C) of the primary at the tap with the tank; null without a tank (single-resonant) */
+  surgeImpedance: number | null;
+  /** frequency of primary + tank at the tap (dual-resonant) or the drive frequency (single-resonant) */
+  primaryFrequency: number;
+  /** primaryFrequency over the tuning target (the secondary with its streamer allowance) */
+  frequencyRatio: number | null;
+  /** largest primary current up to the end of the on-time (the burst is simulated to the on-time even past a trip) */
+  peakPrimaryCurrent: number;
+  /** when the current limit (or the switches' rating) is reached; null if not within the on-time */
+  timeToCurrentLimit: number | null;
+  /** which of the two set timeToCurrentLimit */
+  limitBy: 'currentLimit' | 'switchPeakCurrent' | null;
+  /** peak voltage across the whole tank; null without a tank */
+  capacitorPeakVoltage: number | null;
+  /** RMS current through the whole tank at the repetition rate; null without a tank */
+  capacitorRmsCurrent: number | null;
+  /** ½ C V² at capacitorPeakVoltage */
+  capacitorPeakEnergy: number | null;
+  /** top voltage of the unloaded secondary: an upper bound, without streamer loss */
+  secondaryPeakVoltage: number;
+  baseCurrentPeak: number;
+  burstEnergy: number;
+  averagePower: number;
+  dutyCycle: number;
+  /** fall of the bus voltage over one burst; null without a bus capacitance */
+  busDroop: number | null;
+  /** ½ Cbus Vbus² held by the bus capacitors; null without a bus capacitance */
+  busEnergy: number | null;
+  bank: DriveBankResult | null;
+  /** integration steps per period of the primary */
+  stepsPerPeriod: number;
+  /** the circuit the burst was simulated on */
+  circuit: { L1: number; C1: number | null; R1: number; L2: number; C2: number; R2: number; M: number };
+  waveform: { time: number[]; primaryCurrent: number[]; secondaryVoltage: number[] };
+  caution: string;
+}
+
 export interface Result {
   secondary: SecondaryResult | null;
   topload: ToploadResult | null;
@@ -338,5 +426,7 @@ export interface Result {
   supply: SupplyResult | null;
   response: ResponseResult | null;
   uncertainty: UncertaintyResult | null;
+  /** solid-state supplies only; null for a transformer */
+  drive: DriveResult | null;
   warnings: SolverWarning[];
 }

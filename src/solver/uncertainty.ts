@@ -30,6 +30,8 @@ export interface UncertaintyBase {
   toploadCapacitance: number;
   streamerCapacitance: number;
   tankCapacitance: number | null;
+  /** the tap's frequency over the loaded frequency (a dual-resonant bridge coil's tuning ratio); default 1 */
+  tapFrequencyRatio?: number;
   /** when given, the band is taken around the field model's loaded frequency instead of the lumped estimate */
   field?: FieldUncertaintyBase;
 }
@@ -196,7 +198,7 @@ function combine(d: DesignSI, base: UncertaintyBase, nominal: number, contributi
   let tapTurns: UncertaintyResult['tapTurns'] = null;
   const p = d.primary;
   if (p && base.tankCapacitance !== null) {
-    const required = inductanceForResonance(nominal, base.tankCapacitance);
+    const required = inductanceForResonance(nominal * (base.tapFrequencyRatio ?? 1), base.tankCapacitance);
     const dp = UNCERTAINTY_SOURCES.primaryInductance;
     const more = Math.sqrt(((nominal / low) ** 2 - 1) ** 2 + dp * dp);
     const less = Math.sqrt((1 - (nominal / high) ** 2) ** 2 + dp * dp);

@@ -25,6 +25,12 @@ export const WARNING_CODES = {
   value_not_finite: 'a computed value was not finite and was left out',
   q_below_one: "the secondary's Q is below 1: it does not resonate, coupled results are withheld",
   computation_failed: 'a part of the result could not be computed',
+  drive_defaults_assumed: 'a solid-state supply left out drive fields: the stated defaults (common practice) were taken',
+  bank_unit_voltage_exceeded: "a capacitor's share of the tank's peak voltage in the burst is above its rating",
+  bank_unit_current_exceeded: "a string's RMS current at the repetition rate is above the capacitors' RMS current rating",
+  tank_rating_unknown: 'a solid-state tank given only as a capacitance: its peak voltage and RMS current cannot be checked',
+  bus_droop_high: 'the bus falls by more than 10 % over one burst (common practice)',
+  primary_above_secondary: 'a dual-resonant primary tuned above the secondary (usually 0.85–0.95 ×, common practice)',
 } as const;
 
 export type WarningCode = keyof typeof WARNING_CODES;

@@ -4,12 +4,21 @@ import type { DesignIssue, DesignSI, Result, SweepSeriesName } from '../solver';
 export type Goal =
   | { kind: 'frequency'; hz: number }
   | { kind: 'tap'; turns: number }
-  | { kind: 'coupling'; k: number };
+  | { kind: 'coupling'; k: number }
+  /** solid-state: the on-time for a target peak primary current, A */
+  | { kind: 'onTime'; peak: number }
+  /** solid-state: the tank capacitance for a target peak primary current at the design's on-time, A */
+  | { kind: 'tankForCurrent'; peak: number }
+  /** dual-resonant: the tap for a primary to secondary frequency ratio */
+  | { kind: 'tapRatio'; ratio: number };
 
 export type GoalAnswer =
   | { kind: 'frequency'; turns: number; windingLength: number }
   | { kind: 'tap'; capacitance: number }
-  | { kind: 'coupling'; elevation: number };
+  | { kind: 'coupling'; elevation: number }
+  | { kind: 'onTime'; onTime: number }
+  | { kind: 'tankForCurrent'; capacitance: number; surgeImpedance: number }
+  | { kind: 'tapRatio'; tapTurns: number };
 
 export interface SweepRequest {
   path: string;
@@ -30,6 +39,8 @@ export interface TuningCurve {
   secondaryFrequency: number;
   /** with the streamer allowance */
   targetFrequency: number;
+  /** what the tap aims at: targetFrequency, times the tuning ratio of a dual-resonant bridge coil */
+  primaryTargetFrequency?: number;
   tapTurns: number | null;
   tapLow: number | null;
   tapHigh: number | null;
@@ -49,6 +60,19 @@ export interface ExchangeCurve {
   k: number;
 }
 
+export interface BurstCurve {
+  /** the burst as simulated: time, primary current, secondary top voltage */
+  rows: Array<{ t: number; current: number; voltage: number }>;
+  /** the peak primary current reached by each on-time up to the design's: the running peak of |current| */
+  peaks: Array<{ onTime: number; peak: number }>;
+  onTime: number;
+  peakPrimaryCurrent: number;
+  currentLimit: number | null;
+  switchPeakCurrent: number | null;
+  timeToCurrentLimit: number | null;
+  topology: 'dual-resonant' | 'single-resonant';
+}
+
 export type SolverRequest =
   | { type: 'solve'; input: unknown }
   | { type: 'sweep'; input: unknown; sweep: SweepRequest }
@@ -65,6 +89,8 @@ export interface ChartsData {
   tuning: TuningCurve | null;
   coupling: CouplingCurve | null;
   exchange: ExchangeCurve | null;
+  /** solid-state supplies: the burst and the peak current against on-time */
+  burst: BurstCurve | null;
 }
 
 export type SolverReply =

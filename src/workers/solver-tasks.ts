@@ -2,7 +2,10 @@ import { parseDesign } from '../lib/design';
 import {
   energyExchange,
   elevationForCoupling,
+  onTimeForTargetPeak,
   solve,
+  tankForTargetPeak,
+  tapForTuningRatio,
   sweep,
   tankCapacitanceForTap,
   turnsForFrequency,
@@ -11,6 +14,7 @@ import {
   type Result,
 } from '../solver';
 import type {
+  BurstCurve,
   ChartsData,
   CouplingCurve,
   ExchangeCurve,
@@ -44,6 +48,7 @@ export function tuningCurve(d: DesignSI, r: Result): TuningCurve | null {
     rows,
     secondaryFrequency: r.system.resonantFrequency,
     targetFrequency: r.tuning.targetFrequency,
+    primaryTargetFrequency: r.tuning.primaryTargetFrequency,
     tapTurns: r.tuning.tapTurns,
     tapLow: r.uncertainty?.tapTurns?.low ?? null,
     tapHigh: r.uncertainty?.tapTurns?.high ?? null,
@@ -79,6 +84,34 @@ export function exchangeCurve(r: Result): ExchangeCurve | null {
   return { rows, firstPrimaryMinimum: e.firstPrimaryMinimum, residualPrimaryEnergy: e.residualPrimaryEnergy, k };
 }
 
+const PEAK_POINTS = 200;
+
+/** The burst of a solid-state design for its charts: the waveform, and the running peak of |primary current| against time. */
+export function burstCurve(r: Result): BurstCurve | null {
+  const d = r.drive;
+  if (!d || d.waveform.time.length === 0) return null;
+  const w = d.waveform;
+  const rows = w.time.map((t, i) => ({ t, current: w.primaryCurrent[i], voltage: w.secondaryVoltage[i] }));
+  // the burst is the same up to any shorter on-time, so the running peak is the peak at that on-time
+  const peaks: BurstCurve['peaks'] = [];
+  const every = Math.max(1, Math.floor(rows.length / PEAK_POINTS));
+  let peak = 0;
+  for (let i = 0; i < rows.length; i++) {
+    peak = Math.max(peak, Math.abs(rows[i].current));
+    if (i % every === 0 || i === rows.length - 1) peaks.push({ onTime: rows[i].t, peak });
+  }
+  return {
+    rows,
+    peaks,
+    onTime: d.onTime,
+    peakPrimaryCurrent: d.peakPrimaryCurrent,
+    currentLimit: d.currentLimit,
+    switchPeakCurrent: d.switchPeakCurrent,
+    timeToCurrentLimit: d.timeToCurrentLimit,
+    topology: d.topology,
+  };
+}
+
 export function sweepData(d: DesignSI, req: SweepRequest): SweepData {
   const s = sweep(d, req.path, req.from, req.to, req.points, req.series);
   const rows = s.values.map((x, i) => {
@@ -102,6 +135,18 @@ export function goalAnswer(d: DesignSI, goal: Goal): GoalAnswer | null {
     case 'coupling': {
       const e = elevationForCoupling(d, goal.k);
       return e === null ? null : { kind: 'coupling', elevation: e };
+    }
+    case 'onTime': {
+      const a = onTimeForTargetPeak(d, goal.peak);
+      return a.ok ? { kind: 'onTime', onTime: a.value } : null;
+    }
+    case 'tankForCurrent': {
+      const a = tankForTargetPeak(d, goal.peak);
+      return a.ok ? { kind: 'tankForCurrent', ...a.value } : null;
+    }
+    case 'tapRatio': {
+      const a = tapForTuningRatio(d, goal.ratio);
+      return a.ok ? { kind: 'tapRatio', tapTurns: a.value } : null;
     }
   }
 }
@@ -127,7 +172,7 @@ export function runRequest(id: number, request: SolverRequest, now: () => number
         return { id, ok: true, reply: { type: 'sweep', data: sweepData(d, request.sweep) } };
       case 'charts': {
         const result = solve(d);
-        const data: ChartsData = { tuning: tuningCurve(d, result), coupling: couplingCurve(d, result), exchange: exchangeCurve(result) };
+        const data: ChartsData = { tuning: tuningCurve(d, result), coupling: couplingCurve(d, result), exchange: exchangeCurve(result), burst: burstCurve(result) };
         return { id, ok: true, reply: { type: 'charts', data } };
       }
       case 'goal':

@@ -21,6 +21,40 @@ async function solve(body: string | object) {
   return { status: r.status, body: await r.json() };
 }
 
+const bridgeCoil = exampleDesigns.find((e) => e.id === 'solid-state-helical')!.design;
+
+describe('POST /api/v1/solve with a solid-state supply', () => {
+  it('returns the drive section: the burst at the tap, tuned to the ratio, with the bank checked', async () => {
+    const { status, body } = await solve(bridgeCoil);
+    expect(status).toBe(200);
+    expect(body.drive.topology).toBe('dual-resonant');
+    expect(Math.abs(body.drive.primaryFrequency / (0.9 * body.tuning.targetFrequency) - 1)).toBeLessThan(1e-3);
+    expect(body.drive.peakPrimaryCurrent).toBeGreaterThan(0);
+    expect(body.drive.capacitorPeakVoltage).toBeGreaterThan(body.drive.busVoltage);
+    expect(body.drive.waveform.time.length).toBe(body.drive.waveform.primaryCurrent.length);
+    expect(body.drive.bank.series).toBe(4);
+    expect(body.supply.energyPerBang).toBeNull();
+    expect(body.tank.bleeder).toBeNull();
+  });
+  it('a transformer design answers drive: null', async () => {
+    const { body } = await solve(medium);
+    expect(body.drive).toBeNull();
+  });
+  it('refuses bad drive fields with 400, naming the field', async () => {
+    for (const [patch, path] of [
+      [{ onTime: '150 kg' }, 'supply.onTime'],
+      [{ topology: 'triple-resonant' }, 'supply.topology'],
+      [{ repetitionRate: -5 }, 'supply.repetitionRate'],
+      [{ currentLimit: '450 V' }, 'supply.currentLimit'],
+    ] as const) {
+      const { status, body } = await solve({ ...bridgeCoil, supply: { ...bridgeCoil.supply, ...patch } });
+      expect(status, path).toBe(400);
+      expect(body.error.code).toBe('validation_failed');
+      expect(body.error.issues.map((i: { path: string }) => i.path), path).toContain(path);
+    }
+  });
+});
+
 describe('POST /api/v1/solve', () => {
   it('answers a valid design without sign-in with every section of the result', async () => {
     const { status, body } = await solve(medium);

@@ -152,3 +152,41 @@ describe('tapPosition(turns)', () => {
     expect(tapPosition(2.9999)).toBe('3 turns + 0°');
   });
 });
+
+describe('buildSheet for a bridge-driven coil', () => {
+  const design = example('solid-state-helical');
+  const result = solve(design);
+  const sheet = buildSheet(design, result, { rpm: 40, margin: 0.15, every: 150 });
+  const d = sheet.drive!;
+
+  it('has no bleeders and no ½CV² of the bus; the bank is checked against the burst per capacitor', () => {
+    expect(sheet.tank!.energyAtSupplyPeak).toBeNull();
+    expect(sheet.tank!.bank!.perUnitVoltage).toBeNull();
+    assertClose(d.bank!.unitPeakVoltage, result.drive!.capacitorPeakVoltage! / 4, 1e-12, 'per capacitor');
+    assertClose(d.bank!.stringRmsCurrent, result.drive!.capacitorRmsCurrent! / 4, 1e-12, 'per string');
+    assertClose(d.bank!.unitCapacitance, 150e-9, 1e-9, 'unit capacitance');
+    const sections = sheetSections(sheet);
+    const text = JSON.stringify(sections);
+    expect(text).not.toMatch(/Bleeders/);
+    expect(text).not.toMatch(/Stored energy at supply peak/);
+    const drive = sections.find((x) => x.id === 'drive')!;
+    expect(drive.caution).toBe('bus');
+    expect(drive.table!.rows[0][0]).toBe('Peak voltage');
+  });
+
+  it('picks current-transformer ratios by the rule of thumb: ≤ 5 A out for feedback, about 0.5 A out at the trip', () => {
+    // 600 A trip: 1:1000 gives 0.6 A, the first listed ratio at or below 0.5 A is 1:2000
+    expect(d.tripCt.ratio).toBe(2000);
+    assertClose(d.tripCt.outputAtTrip, 600 / 2000, 1e-12, 'trip output');
+    expect(d.feedbackCt.outputPeak).toBeLessThanOrEqual(5);
+    expect(d.feedbackCt.ratio).toBe(200); // about 510 A peak: 1:100 would give 5.1 A, 1:200 gives 2.6 A
+  });
+
+  it('states the bus capacitor, its energy and droop, and the primary conductor’s heat', () => {
+    assertClose(d.bus.capacitance!, 3300e-6, 1e-9, 'bus capacitance');
+    assertClose(d.bus.energy!, 0.5 * 3300e-6 * 340 ** 2, 1e-9, 'bus energy');
+    assertClose(d.conductor.heat!, result.drive!.capacitorRmsCurrent! ** 2 * result.drive!.circuit.R1, 1e-12, 'I²R');
+    // C·V·ΔV ≈ energy per burst at 5 % droop
+    assertClose(d.bus.suggestedCapacitance * 340 * 0.05 * 340, result.drive!.burstEnergy, 1e-9, 'suggested bus capacitance');
+  });
+});

@@ -55,7 +55,9 @@ function valuesWith(system: 'metric' | 'imperial', path = ''): FormValues {
   v.primary.enabled = true;
   v.primary.shape = path === 'primary.angle' ? 'conical' : 'flat';
   v.tank.mode = path.startsWith('tank.') && path !== 'tank.capacitance' ? 'bank' : 'single';
-  v.supply.kind = path === 'supply.busVoltage' ? 'solid-state' : 'transformer';
+  const transformerPaths = ['supply.voltage', 'supply.current', 'supply.lineFrequency', 'supply.breakRate'];
+  v.supply.kind = path.startsWith('supply.') && !transformerPaths.includes(path) ? 'solid-state' : 'transformer';
+  if (path === 'supply.tuningRatio') v.supply.tuningRatio = '0.9';
   v.tuning.streamerMode = path === 'tuning.streamerLength' ? 'length' : 'capacitance';
   if (path.startsWith('secondary.wire.') && path !== 'secondary.wire.awg' && path !== 'secondary.wire.insulation') {
     v.secondary.wireMode = 'diameter';

@@ -129,8 +129,51 @@ describe('troubleshooting rules: each once triggered, once clear', () => {
     expect(status('spark-below-estimate', ctx(spark, { sparkLength: 0.8 * est }))).toBe('clear');
   });
 
+  const bridgeSupply = solid.supply as Extract<DesignSI['supply'], { kind: 'solid-state' }>;
+  const withSupply = (patch: Partial<typeof bridgeSupply>): DesignSI => ({ ...solid, supply: { ...bridgeSupply, ...patch } });
+  const solidResult = solve(solid);
+
+  it('trip-early: a trip the burst reaches early, or a measured peak at the trip, triggers; the demo coil stays below its 600 A trip', () => {
+    expect(solidResult.drive!.peakPrimaryCurrent).toBeLessThan(600);
+    expect(status('trip-early', ctx(solid))).toBe('clear');
+    expect(status('trip-early', ctx(solid, { tripSetting: 300 }))).toBe('triggered');
+    expect(status('trip-early', ctx(solid, { peakPrimaryCurrent: 590, tripSetting: 600 }))).toBe('triggered');
+    expect(status('trip-early', ctx(withSupply({ currentLimit: null })))).toBe('unknown');
+    expect(status('trip-early', ctx(spark))).toBe('not-applicable');
+  });
+
+  it('feedback-phase-lag: 150 ns is 5.8° at the demo coil’s 107 kHz (clear); at 400 kHz without phase lead it triggers', () => {
+    expect(status('feedback-phase-lag', ctx(solid))).toBe('clear');
+    expect(status('feedback-phase-lag', ctx(solid, { primaryRingFrequency: 400e3 }))).toBe('unknown');
+    expect(status('feedback-phase-lag', ctx(solid, { primaryRingFrequency: 400e3 }, { phaseLead: false }))).toBe('triggered');
+    expect(status('feedback-phase-lag', ctx(solid, { primaryRingFrequency: 400e3 }, { phaseLead: true }))).toBe('clear');
+    expect(status('feedback-phase-lag', ctx(spark))).toBe('not-applicable');
+  });
+
+  it('bus-droop: 3300 µF droops about 1 % (clear), 20 µF more than 10 % (triggered), no bus capacitance is unknown', () => {
+    expect(status('bus-droop', ctx(solid))).toBe('clear');
+    expect(status('bus-droop', ctx(withSupply({ busCapacitance: 20e-6 })))).toBe('triggered');
+    expect(status('bus-droop', ctx(withSupply({ busCapacitance: null })))).toBe('unknown');
+  });
+
+  it('primary-above-secondary-bridge: the demo tuned to 0.9 × is clear; a measured ring-down 5 % above the secondary triggers', () => {
+    expect(status('primary-above-secondary-bridge', ctx(solid))).toBe('clear');
+    const fs = solidResult.tuning!.targetFrequency;
+    expect(status('primary-above-secondary-bridge', ctx(solid, { primaryRingFrequency: 1.05 * fs }))).toBe('triggered');
+    expect(status('primary-above-secondary-bridge', ctx(withSupply({ tuningRatio: 1.05 })))).toBe('triggered');
+    expect(status('primary-above-secondary-bridge', ctx(spark))).toBe('not-applicable');
+  });
+
+  it('bank-burst-stress: the demo bank is within its ratings; 1 kV units or a 3 A RMS rating trigger', () => {
+    expect(status('bank-burst-stress', ctx(solid))).toBe('clear');
+    const bank = solid.tank as Extract<DesignSI['tank'], { kind: 'bank' }>;
+    expect(status('bank-burst-stress', ctx({ ...solid, tank: { ...bank, unitVoltage: 1000 } }))).toBe('triggered');
+    expect(status('bank-burst-stress', ctx({ ...solid, tank: { ...bank, unitRmsCurrent: 3 } }))).toBe('triggered');
+    expect(status('bank-voltage-margin', ctx(solid))).toBe('not-applicable');
+  });
+
   it('every rule has a source, a threshold and a next check, and is tested above', () => {
-    const tested = ['tap-from-prediction-off', 'primary-off-secondary', 'tap-out-of-range', 'coupling-high', 'coupling-low', 'tank-near-resonant', 'tank-too-large', 'bank-voltage-margin', 'topload-small', 'no-breakout-point', 'topload-large-for-power', 'rf-ground', 'strike-rail', 'primary-clearance', 'supply-ground-fault', 'spark-below-estimate'];
+    const tested = ['trip-early', 'feedback-phase-lag', 'bus-droop', 'primary-above-secondary-bridge', 'bank-burst-stress', 'tap-from-prediction-off', 'primary-off-secondary', 'tap-out-of-range', 'coupling-high', 'coupling-low', 'tank-near-resonant', 'tank-too-large', 'bank-voltage-margin', 'topload-small', 'no-breakout-point', 'topload-large-for-power', 'rf-ground', 'strike-rail', 'primary-clearance', 'supply-ground-fault', 'spark-below-estimate'];
     expect(RULES.map((r) => r.id).sort()).toEqual([...tested].sort());
     for (const r of RULES) {
       expect(r.source.length, r.id).toBeGreaterThan(10);

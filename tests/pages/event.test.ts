@@ -84,6 +84,14 @@ describe('GET /designs/:id/event', () => {
     const html = await stated.text();
     expect(html).toContain(formatLengthBoth(0.254 + 1.2 + PERIMETER_MARGIN, 'metric', 3));
     expect(html).toContain('assumes the stated spark length');
+    // the sheet of a bridge-driven coil: the bus and its lethal charge, its own checklist, no bleeders or spark gap
+    expect(html).toContain('data-testid="bus-voltage"');
+    expect(html).toContain('data-testid="tank-peak-voltage"');
+    expect(html).toContain('optical fibre');
+    expect(html).toContain('Bus capacitors discharged');
+    expect(html).not.toContain('fitted with bleeders');
+    expect(html).not.toContain('Spark gap enclosed');
+    expect(html).not.toContain('data-testid="tank-energy"');
   });
 
   it('GET /designs/:id/event?spark=bad answers 400 with a message naming the field', async () => {

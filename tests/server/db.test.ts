@@ -4,7 +4,7 @@ import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { count } from 'drizzle-orm';
 import { openDb, prepareDb } from '../../src/server/db/client';
-import { designs, user, designRevisions, groups, groupMembers, reviews } from '../../src/server/db/schema';
+import { designs, user, designRevisions, groups, groupMembers, reviews, measurements } from '../../src/server/db/schema';
 import { seedDemo } from '../../scripts/seed-demo';
 
 describe('openDb / prepareDb', () => {
@@ -49,6 +49,7 @@ describe('seedDemo', () => {
       groups: (await db.select({ n: count() }).from(groups))[0].n,
       groupMembers: (await db.select({ n: count() }).from(groupMembers))[0].n,
       reviews: (await db.select({ n: count() }).from(reviews))[0].n,
+      measurements: (await db.select({ n: count() }).from(measurements))[0].n,
     });
     const before = await countsOf();
     expect(before.users).toBe(4);
@@ -56,6 +57,10 @@ describe('seedDemo', () => {
     expect(before.groupMembers).toBe(3);
     expect((await db.select({ s: reviews.state }).from(reviews)).map((r) => r.s).sort()).toEqual(['changes_requested', 'signed_off']);
     expect(before.designs).toBe(3);
+    // every demo design carries a bench history, the bridge-driven coil its own kinds too
+    const kinds = (await db.select({ designId: measurements.designId, kind: measurements.kind }).from(measurements)).map((m) => m);
+    expect(new Set(kinds.map((k) => k.designId)).size).toBe(3);
+    for (const k of ['primary-ring-frequency', 'peak-primary-current', 'trip-setting']) expect(kinds.map((m) => m.kind)).toContain(k);
     const second = await seedDemo(db);
     expect(second.created).toBe(false);
     expect(await countsOf()).toEqual(before);

@@ -107,10 +107,37 @@ describe('evaluateTank / evaluateSupply', () => {
   it('evaluateSupply(transformer) assumes two firings per line cycle without a break rate', () => {
     expect(evaluateSupply({ ...nst, breakRate: null }, 10e-9).breakRate).toBe(120);
   });
-  it('evaluateSupply(solid-state) has no resonant capacitance and no spark-length estimate', () => {
-    const s = evaluateSupply({ kind: 'solid-state', busVoltage: 340 }, 100e-9);
+  const bridge = {
+    kind: 'solid-state' as const,
+    busVoltage: 340,
+    topology: 'dual-resonant' as const,
+    bridge: 'full' as const,
+    onTime: 100e-6,
+    repetitionRate: 200,
+    switchPeakCurrent: null,
+    currentLimit: null,
+    busCapacitance: null,
+    tuningRatio: 0.9,
+    defaulted: [],
+  };
+  it('evaluateSupply(solid-state) has no resonant capacitance, no spark-length estimate and no ½CV² energy per firing', () => {
+    const s = evaluateSupply(bridge, 100e-9);
     expect(s.resonantCapacitance).toBeNull();
     expect(s.sparkLengthEstimate).toBeNull();
+    expect(s.energyPerBang).toBeNull();
     expect(s.peakVoltage).toBe(340);
+  });
+  it('evaluateTank with a solid-state supply gives no bus-charged energy, per-unit share, rating margin or bleeders', () => {
+    const t = evaluateTank({ kind: 'bank', unitCapacitance: 150e-9, unitVoltage: 2000, series: 4, parallel: 2, unitRmsCurrent: null }, bridge);
+    assertClose(t.capacitance, 75e-9, 1e-12, 'bank capacitance');
+    expect(t.voltageRating).toBe(8000);
+    expect(t.energyAtSupplyPeak).toBeNull();
+    expect(t.perUnitVoltage).toBeNull();
+    expect(t.ratingMargin).toBeNull();
+    expect(t.bleeder).toBeNull();
+    // the same bank on a transformer keeps its charged-bank figures
+    const nstTank = evaluateTank({ kind: 'bank', unitCapacitance: 150e-9, unitVoltage: 2000, series: 4, parallel: 2 }, nst);
+    expect(nstTank.bleeder).not.toBeNull();
+    expect(nstTank.energyAtSupplyPeak).toBeGreaterThan(0);
   });
 });

@@ -10,6 +10,7 @@ export const INPUT_UNITS: Record<string, Array<{ label: string; factor: number }
   m: units('in', 'cm', 'm'),
   '1': [{ label: 'k', factor: 1 }],
   turns: [{ label: 'turns', factor: 1 }],
+  A: units('A', 'kA', 'mA'),
 };
 
 export function unitsFor(kind: MeasurementKind) {

@@ -8,7 +8,10 @@ import { CsvButton } from './CsvButton';
 export function TuningChart({ curve }: { curve: TuningCurve }) {
   const fs = curve.secondaryFrequency / 1e3;
   const ft = curve.targetFrequency / 1e3;
-  const data = curve.rows.map((r) => ({ tap: r.tap, fp: r.primaryFrequency === null ? null : r.primaryFrequency / 1e3, fs, ft }));
+  const ratio = curve.primaryTargetFrequency === undefined ? 1 : curve.primaryTargetFrequency / curve.targetFrequency;
+  const fr = (curve.primaryTargetFrequency ?? curve.targetFrequency) / 1e3;
+  const shifted = Math.abs(ratio - 1) > 1e-9;
+  const data = curve.rows.map((r) => ({ tap: r.tap, fp: r.primaryFrequency === null ? null : r.primaryFrequency / 1e3, fs, ft, ...(shifted ? { fr } : {}) }));
   const refs = curve.tapTurns !== null ? [{ x: curve.tapTurns, label: `tap ${formatFixed(curve.tapTurns, 2)}`, color: 'var(--color-copper)' }] : [];
   // the first quarter turn resonates far above the secondary; keep the crossing readable
   const top = Math.ceil((2.5 * Math.max(fs, ft)) / 10) * 10;
@@ -30,13 +33,16 @@ export function TuningChart({ curve }: { curve: TuningCurve }) {
           { key: 'fp', name: 'primary + tank', color: 'var(--color-copper)' },
           { key: 'fs', name: 'secondary, no streamers', color: 'var(--color-ink-soft)', dashed: true },
           { key: 'ft', name: 'secondary with streamer allowance', color: 'var(--color-arc)', dashed: true },
+          ...(shifted ? [{ key: 'fr', name: `primary target, ${formatFixed(ratio, 2)} × the secondary`, color: 'var(--color-copper)', dashed: true }] : []),
         ]}
         refs={refs}
         yDomain={[0, top]}
         caption={
           curve.tapLow !== null && curve.tapHigh !== null
-            ? `Where the copper curve crosses the blue dashed line is the tap; search ${formatFixed(Math.min(curve.tapLow, curve.tapHigh), 2)}–${formatFixed(Math.max(curve.tapLow, curve.tapHigh), 2)} turns.`
-            : 'Where the copper curve crosses the blue dashed line is the tap.'
+            ? `Where the copper curve crosses the ${shifted ? 'copper' : 'blue'} dashed line is the tap; search ${formatFixed(Math.min(curve.tapLow, curve.tapHigh), 2)}–${formatFixed(Math.max(curve.tapLow, curve.tapHigh), 2)} turns.`
+            : shifted
+              ? `Where the copper curve crosses the copper dashed line (${formatFixed(ratio, 2)} × the secondary) is the tap of the bridge-driven primary.`
+              : 'Where the copper curve crosses the blue dashed line is the tap.'
         }
       />
     </div>

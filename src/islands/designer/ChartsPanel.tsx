@@ -9,6 +9,8 @@ import { WhenVisible } from './WhenVisible';
 const TuningChart = lazy(() => import('../charts/TuningChart'));
 const CouplingChart = lazy(() => import('../charts/CouplingChart'));
 const ExchangeChart = lazy(() => import('../charts/ExchangeChart'));
+const BurstChart = lazy(() => import('../charts/BurstChart'));
+const PeakCurrentChart = lazy(() => import('../charts/PeakCurrentChart'));
 
 type Props = { design: DesignSI; input: unknown; inputKey: string; system: UnitSystem; showSweep?: boolean };
 
@@ -36,6 +38,22 @@ function Charts({ input, inputKey, system }: { input: unknown; inputKey: string;
   return (
     <Suspense fallback={loading}>
       <div className="grid gap-4 lg:grid-cols-2">
+        {data.burst && (
+          <>
+            <section className="cw-card lg:col-span-2" aria-labelledby="chart-burst">
+              <h3 id="chart-burst" className="mb-2 text-base font-semibold">
+                The burst: primary current and secondary voltage
+              </h3>
+              <BurstChart curve={data.burst} />
+            </section>
+            <section className="cw-card lg:col-span-2" aria-labelledby="chart-peak">
+              <h3 id="chart-peak" className="mb-2 text-base font-semibold">
+                Peak primary current against on-time
+              </h3>
+              <PeakCurrentChart curve={data.burst} />
+            </section>
+          </>
+        )}
         <section className="cw-card" aria-labelledby="chart-tuning">
           <h3 id="chart-tuning" className="mb-2 text-base font-semibold">
             Tuning: primary frequency against the tap
@@ -48,12 +66,14 @@ function Charts({ input, inputKey, system }: { input: unknown; inputKey: string;
           </h3>
           {data.coupling ? <CouplingChart curve={data.coupling} system={system} /> : <p className="text-sm text-ink-soft">Needs a primary.</p>}
         </section>
+        {!data.burst && (
         <section className="cw-card lg:col-span-2" aria-labelledby="chart-exchange">
           <h3 id="chart-exchange" className="mb-2 text-base font-semibold">
             Energy exchange between primary and secondary
           </h3>
           {data.exchange ? <ExchangeChart curve={data.exchange} /> : <p className="text-sm text-ink-soft">Needs a primary tuned to the secondary (a tap within reach) and a tank capacitor.</p>}
         </section>
+        )}
       </div>
     </Suspense>
   );

@@ -129,6 +129,17 @@ function DesignerInner(props: DesignerProps) {
       setValue('tank.mode', 'single', opts);
       setValue('tank.capacitance', capacitanceText(a.capacitance), opts);
     }
+    if (a.kind === 'onTime') setValue('supply.onTime', `${Number((a.onTime * 1e6).toPrecision(3))} us`, opts);
+    if (a.kind === 'tankForCurrent') {
+      const bank = shown?.design.tank;
+      if (values.tank.mode === 'bank' && bank && bank.kind === 'bank') {
+        setValue('tank.parallel', String(Math.max(1, Math.round((a.capacitance * bank.series) / bank.unitCapacitance))), opts);
+      } else {
+        setValue('tank.mode', 'single', opts);
+        setValue('tank.capacitance', capacitanceText(a.capacitance), opts);
+      }
+    }
+    if (a.kind === 'tapRatio' && goal.kind === 'tapRatio') setValue('supply.tuningRatio', String(goal.ratio), opts);
     if (a.kind === 'coupling' && goal.kind === 'coupling') {
       setValue('secondary.elevation', lengthInputText(a.elevation, system, 4), opts);
       setValue('tuning.targetCoupling', String(goal.k), opts);
@@ -193,7 +204,7 @@ function DesignerInner(props: DesignerProps) {
                 <SupplyPart />
                 <TuningPart system={system} />
               </form>
-              <GoalPanel input={input} system={system} hasPrimary={values.primary.enabled} hasTank={values.tank.mode !== 'none'} readOnly={readOnly} apply={applyGoal} />
+              <GoalPanel input={input} system={system} hasPrimary={values.primary.enabled} hasTank={values.tank.mode !== 'none'} bridge={values.supply.kind === 'solid-state'} readOnly={readOnly} apply={applyGoal} />
             </div>
             <ResultsAside live={live} pending={pending} shown={shown} system={system} onRetry={retry} />
           </div>

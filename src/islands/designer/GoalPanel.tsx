@@ -10,6 +10,8 @@ type Props = {
   system: UnitSystem;
   hasPrimary: boolean;
   hasTank: boolean;
+  /** a solid-state supply: offers the drive's goals */
+  bridge: boolean;
   readOnly: boolean;
   /** writes the answer into the form */
   apply: (answer: GoalAnswer, goal: Goal) => void;
@@ -18,13 +20,16 @@ type Props = {
 type Status = { tone: 'ok' | 'fault'; text: string } | null;
 
 /** Goal-first entry: fix what the coil must do and let the solver's inverse functions fill in the input. */
-export function GoalPanel({ input, system, hasPrimary, hasTank, readOnly, apply }: Props) {
+export function GoalPanel({ input, system, hasPrimary, hasTank, bridge, readOnly, apply }: Props) {
   const [freq, setFreq] = useState('');
   const [tap, setTap] = useState('');
   const [k, setK] = useState('');
-  const [status, setStatus] = useState<Record<Goal['kind'], Status>>({ frequency: null, tap: null, coupling: null });
+  const [peak, setPeak] = useState('');
+  const [tankPeak, setTankPeak] = useState('');
+  const [ratio, setRatio] = useState('');
+  const [status, setStatus] = useState<Record<Goal['kind'], Status>>({ frequency: null, tap: null, coupling: null, onTime: null, tankForCurrent: null, tapRatio: null });
   const [busy, setBusy] = useState<Goal['kind'] | null>(null);
-  const ids = { f: useId(), t: useId(), k: useId() };
+  const ids = { f: useId(), t: useId(), k: useId(), p: useId(), c: useId(), r: useId() };
 
   async function run(goal: Goal, describe: (a: GoalAnswer) => string, unreachable: string) {
     setBusy(goal.kind);
@@ -71,6 +76,42 @@ export function GoalPanel({ input, system, hasPrimary, hasTank, readOnly, apply 
       { kind: 'coupling', k: v },
       (a) => (a.kind === 'coupling' ? `Secondary elevation set to ${lengthInputText(a.elevation, system, 4)} for k = ${v}.` : ''),
       'No secondary elevation gives this k with this primary; more primary turns near the secondary couple tighter.',
+    );
+  }
+
+  async function onPeak(e: FormEvent) {
+    e.preventDefault();
+    const p = await parseQuantityLazy(peak, 'current');
+    if (!p.ok || !(p.value > 0)) return setStatus((s) => ({ ...s, onTime: { tone: 'fault', text: `Target peak current: ${p.ok ? 'must be above 0' : p.message}` } }));
+    void run(
+      { kind: 'onTime', peak: p.value },
+      (a) => (a.kind === 'onTime' ? `${designField('supply.onTime').label} set to ${formatQuantity(a.onTime, 'time', { digits: 3 })} for ${formatQuantity(p.value, 'current', { digits: 3 })}.` : ''),
+      'The primary current does not reach this peak within 1 ms: losses and the secondary’s load cap it.',
+    );
+  }
+
+  async function onTankPeak(e: FormEvent) {
+    e.preventDefault();
+    const p = await parseQuantityLazy(tankPeak, 'current');
+    if (!p.ok || !(p.value > 0)) return setStatus((s) => ({ ...s, tankForCurrent: { tone: 'fault', text: `Target peak current: ${p.ok ? 'must be above 0' : p.message}` } }));
+    void run(
+      { kind: 'tankForCurrent', peak: p.value },
+      (a) =>
+        a.kind === 'tankForCurrent'
+          ? `Tank set near ${formatQuantity(a.capacitance, 'capacitance', { digits: 3 })} (surge impedance ${formatQuantity(a.surgeImpedance, 'resistance', { digits: 3 })}); the tap follows.`
+          : '',
+      'No tank capacitance gives this peak at this on-time.',
+    );
+  }
+
+  function onRatio(e: FormEvent) {
+    e.preventDefault();
+    const v = Number(ratio.replace(',', '.'));
+    if (!Number.isFinite(v) || v < 0.5 || v > 1.5) return setStatus((s) => ({ ...s, tapRatio: { tone: 'fault', text: 'Ratio: enter a number between 0.5 and 1.5, e.g. 0.9' } }));
+    void run(
+      { kind: 'tapRatio', ratio: v },
+      (a) => (a.kind === 'tapRatio' ? `${designField('supply.tuningRatio').label} set to ${v}: tap at ${formatFixed(a.tapTurns, 2)} turns.` : ''),
+      'No tap of this primary reaches that ratio with this tank.',
     );
   }
 
@@ -128,6 +169,46 @@ export function GoalPanel({ input, system, hasPrimary, hasTank, readOnly, apply 
         <div className="sm:col-span-2">{hasPrimary ? line('coupling') : <p className="cw-hint">Needs a primary.</p>}</div>
       </form>
       {!hasTank && hasPrimary && <p className="cw-hint">The tap goal needs a tank capacitor or will add one.</p>}
+      {bridge && (
+        <>
+          <form onSubmit={onPeak} className="grid gap-2 sm:grid-cols-[1fr_auto] sm:items-end">
+            <div>
+              <label htmlFor={ids.p} className="cw-label text-sm">
+                Target peak primary current
+              </label>
+              <input id={ids.p} className="cw-input" value={peak} onChange={(e) => setPeak(e.target.value)} placeholder="e.g. 400 A" disabled={readOnly || !hasPrimary} autoComplete="off" />
+            </div>
+            <button type="submit" className="cw-btn cw-btn-quiet" disabled={readOnly || !hasPrimary || busy !== null}>
+              Fill in on-time
+            </button>
+            <div className="sm:col-span-2">{line('onTime')}</div>
+          </form>
+          <form onSubmit={onTankPeak} className="grid gap-2 sm:grid-cols-[1fr_auto] sm:items-end">
+            <div>
+              <label htmlFor={ids.c} className="cw-label text-sm">
+                Peak primary current at this on-time
+              </label>
+              <input id={ids.c} className="cw-input" value={tankPeak} onChange={(e) => setTankPeak(e.target.value)} placeholder="e.g. 400 A" disabled={readOnly || !hasTank} autoComplete="off" />
+            </div>
+            <button type="submit" className="cw-btn cw-btn-quiet" disabled={readOnly || !hasTank || busy !== null}>
+              Fill in tank capacitance
+            </button>
+            <div className="sm:col-span-2">{line('tankForCurrent')}</div>
+          </form>
+          <form onSubmit={onRatio} className="grid gap-2 sm:grid-cols-[1fr_auto] sm:items-end">
+            <div>
+              <label htmlFor={ids.r} className="cw-label text-sm">
+                Primary frequency as a share of the secondary
+              </label>
+              <input id={ids.r} className="cw-input" value={ratio} onChange={(e) => setRatio(e.target.value)} placeholder="e.g. 0.9" inputMode="decimal" disabled={readOnly || !hasTank} autoComplete="off" />
+            </div>
+            <button type="submit" className="cw-btn cw-btn-quiet" disabled={readOnly || !hasTank || busy !== null}>
+              Find the tap
+            </button>
+            <div className="sm:col-span-2">{line('tapRatio')}</div>
+          </form>
+        </>
+      )}
     </section>
   );
 }

@@ -14,7 +14,7 @@ export interface SheetTable {
   rows: string[][];
 }
 
-export type SheetCaution = 'stored-energy' | 'supply' | 'rf' | 'general';
+export type SheetCaution = 'stored-energy' | 'supply' | 'bus' | 'rf' | 'general';
 
 export interface SheetSection {
   id: string;
@@ -99,6 +99,7 @@ export function sheetSections(sheet: BuildSheet): SheetSection[] {
     out.push({ id: 'primary', title: 'Primary', rows });
   }
 
+  const d = sheet.drive;
   const t = sheet.tank;
   if (t) {
     const rows: SheetRow[] = [{ label: 'Tank capacitance', value: fmt.capacitance(t.capacitance) }];
@@ -114,7 +115,7 @@ export function sheetSections(sheet: BuildSheet): SheetSection[] {
         { label: 'String voltage rating', value: fmt.voltage(b.voltageRating), note: b.ratingMargin !== null ? `${fmt.sig(b.ratingMargin, 3)} × the supply peak (aim for at least 2 ×, common practice)` : undefined },
       );
       if (b.perUnitVoltage !== null) rows.push({ label: 'Voltage per unit at supply peak', value: fmt.voltage(b.perUnitVoltage) });
-      rows.push({
+      if (!d) rows.push({
         label: 'Bleeders',
         value: `${b.bleeder.count} × ${fmt.resistance(b.bleeder.resistance)} ½ W, one across each unit`,
         note:
@@ -123,11 +124,60 @@ export function sheetSections(sheet: BuildSheet): SheetSection[] {
             : `time constant ${fmt.sig(b.bleeder.timeConstant, 3)} s`,
       });
     }
-    out.push({ id: 'tank', title: 'Tank capacitor bank', rows, notes: BANK_NOTES, caution: 'stored-energy' });
+    out.push({ id: 'tank', title: 'Tank capacitor bank', rows, notes: d ? BANK_NOTES.filter((n) => !/bleeder/i.test(n.text)) : BANK_NOTES, caution: 'stored-energy' });
+  }
+
+  if (d) {
+    const rows: SheetRow[] = [
+      { label: 'Drive', value: `${d.topology === 'dual-resonant' ? 'dual-resonant' : 'single-resonant'}, ${d.bridge} bridge, ${fmt.voltage(d.busVoltage)} bus`, note: `${fmt.sig(d.onTime * 1e6, 3)} µs bursts at ${fmt.frequency(d.repetitionRate)}` },
+      { label: 'Primary frequency', value: fmt.frequency(d.primaryFrequency), note: 'check it by the ring-down with the bridge disconnected' },
+      { label: 'Peak primary current', value: `${fmt.sig(d.peakPrimaryCurrent, 3)} A`, note: 'at the end of the burst; the switches must be rated for it pulsed' },
+    ];
+    if (d.surgeImpedance !== null) rows.push({ label: 'Surge impedance', value: fmt.resistance(d.surgeImpedance), note: '√(L/C) of the primary at the tap with the tank' });
+    if (d.capacitorPeakVoltage !== null) rows.push({ label: 'Tank peak voltage in the burst', value: fmt.voltage(d.capacitorPeakVoltage) });
+    if (d.capacitorRmsCurrent !== null) rows.push({ label: 'Tank RMS current', value: `${fmt.sig(d.capacitorRmsCurrent, 3)} A`, note: 'at the repetition rate' });
+    const b = d.bank;
+    const table: SheetTable | undefined = b
+      ? {
+          columns: ['Per capacitor', 'In the burst', 'Rating', 'Rating / stress'],
+          rows: [
+            ['Peak voltage', fmt.voltage(b.unitPeakVoltage), fmt.voltage(b.unitVoltage), `${fmt.sig(b.voltageMargin, 3)} ×`],
+            ['RMS current', `${fmt.sig(b.stringRmsCurrent, 3)} A`, b.unitRmsCurrent === null ? 'not given' : `${fmt.sig(b.unitRmsCurrent, 3)} A`, b.currentMargin === null ? '—' : `${fmt.sig(b.currentMargin, 3)} ×`],
+            ['Peak current', `${fmt.sig(b.stringPeakCurrent, 3)} A`, 'data sheet (dV/dt × C)', '—'],
+          ],
+        }
+      : undefined;
+    if (b) rows.push({ label: 'Bank layout', value: `${b.series} in series × ${b.parallel} strings`, note: 'each string carries an equal share of the tank current; each capacitor an equal share of the string voltage' });
+    rows.push({
+      label: 'Bus capacitor',
+      value: d.bus.capacitance !== null ? fmt.capacitance(d.bus.capacitance) : `about ${fmt.capacitance(d.bus.suggestedCapacitance)} or more`,
+      note:
+        d.bus.capacitance !== null
+          ? `holds ${fmt.energy(d.bus.energy!)} at the bus voltage: potentially lethal; droop ${d.bus.droop === null ? '—' : fmt.voltage(d.bus.droop)} per burst`
+          : `for about ${fmt.percent(0.05, 0)} droop per burst (common practice), from C·V·ΔV ≈ energy per burst`,
+    });
+    rows.push(
+      {
+        label: 'Feedback current transformer',
+        value: `1:${d.feedbackCt.ratio}`,
+        note: `about ${fmt.sig(d.feedbackCt.outputPeak, 3)} A peak out at the peak primary current (at most about 5 A; common practice, from memory)`,
+      },
+      {
+        label: 'Trip current transformer',
+        value: `1:${d.tripCt.ratio}`,
+        note: `about ${fmt.sig(d.tripCt.outputAtTrip, 3)} A out at ${fmt.sig(d.tripCt.trip, 3)} A into the trip's burden resistor (about 0.5 A; common practice, from memory)`,
+      },
+    );
+    rows.push({
+      label: 'Primary conductor',
+      value: `${fmt.resistance(d.conductor.acResistance)} at ${fmt.frequency(d.primaryFrequency)}`,
+      note: d.conductor.heat !== null ? `${fmt.power(d.conductor.heat)} of heat at ${fmt.sig(d.conductor.rmsCurrent!, 3)} A RMS (skin-effect resistance of a solid round conductor)` : 'skin-effect resistance of a solid round conductor',
+    });
+    out.push({ id: 'drive', title: 'Bridge drive: bank stress, bus, current transformers, conductor', rows, table, notes: SOLID_STATE_NOTES, caution: 'bus' });
   }
 
   const sup = sheet.supply;
-  if (sup) {
+  if (sup && (sup.kind === 'transformer' || !d)) {
     const rows: SheetRow[] = [{ label: 'Supply peak voltage', value: fmt.voltage(sup.peakVoltage) }];
     if (sup.resonantCapacitance !== null) rows.push({ label: 'Resonant capacitance of the transformer', value: fmt.capacitance(sup.resonantCapacitance), note: 'C = I/(2π f V) (P. Lawrence, TCML 2003/June/msg00590)' });
     if (sup.ltrCapacitance !== null) rows.push({ label: 'Larger-than-resonant value', value: fmt.capacitance(sup.ltrCapacitance), note: '1/(4 f Z): charges to full peak in a quarter cycle (bartmcguyer.com, note 1)' });

@@ -53,6 +53,37 @@ export interface BankLayout {
   bleeder: { resistance: number; ratedPower: number; power: number | null; count: number; withinRating: boolean | null; timeConstant: number };
 }
 
+/** Current-transformer ratios the trade picks (common practice, from memory): 1:N with N from this list. */
+export const CT_RATIOS = [33, 50, 100, 200, 300, 500, 1000, 2000] as const;
+/** Feedback CT: at most about 5 A peak out of it at the peak primary current (common practice, from memory). */
+export const FEEDBACK_CT_MAX_OUT = 5;
+/** Trip CT: about 0.5 A peak out at the trip, a few volts across the usual burden (common practice, from memory). */
+export const TRIP_CT_OUT = 0.5;
+/** Bus capacitance suggested for a droop of 5 % over one burst (common practice). */
+export const BUS_DROOP_TARGET = 0.05;
+
+/** The bridge-driven coil's sheet: bank stress, bus capacitor, current transformers and the primary conductor. */
+export interface DriveSheet {
+  topology: 'dual-resonant' | 'single-resonant';
+  bridge: 'full' | 'half';
+  busVoltage: number;
+  onTime: number;
+  repetitionRate: number;
+  peakPrimaryCurrent: number;
+  surgeImpedance: number | null;
+  primaryFrequency: number;
+  capacitorPeakVoltage: number | null;
+  capacitorRmsCurrent: number | null;
+  bank: null | { series: number; parallel: number; unitCapacitance: number; unitVoltage: number; unitPeakVoltage: number; voltageMargin: number; stringRmsCurrent: number; stringPeakCurrent: number; unitRmsCurrent: number | null; currentMargin: number | null };
+  bus: { capacitance: number | null; energy: number | null; droop: number | null; suggestedCapacitance: number };
+  /** 1:N of the feedback current transformer and the peak current out of it */
+  feedbackCt: { ratio: number; outputPeak: number };
+  /** 1:N of the trip current transformer, for the trip or (without one) the peak current */
+  tripCt: { ratio: number; outputAtTrip: number; trip: number };
+  /** the primary conductor's RMS current, AC resistance at the drive frequency and heat in it */
+  conductor: { rmsCurrent: number | null; acResistance: number; heat: number | null };
+}
+
 export interface BuildSheet {
   options: Required<BuildSheetOptions>;
   secondary: {
@@ -107,6 +138,7 @@ export interface BuildSheet {
     /** bypass capacitors the usual filter puts from the leads to the case: 2 up to 9 kV, 4 above (simplified protection filter, hotstreamer.deanostoybox.com/greg/filter.htm; common practice) */
     filterBypassCapacitors: number | null;
   };
+  drive: DriveSheet | null;
 }
 
 /**
@@ -143,14 +175,20 @@ export function buildSheet(design: DesignSI, result: Result, options: BuildSheet
           conductorToBuy: result.primary.conductorLength * (1 + options.margin),
           tapTurns: result.tuning?.tapTurns ?? null,
           conductorLengthAtTap: result.primary.conductorLengthAtTap,
-          targetFrequency: result.tuning?.targetFrequency ?? null,
+          targetFrequency: result.tuning?.primaryTargetFrequency ?? result.tuning?.targetFrequency ?? null,
           calibrated: calibratedTuning(design, result, calibration),
         }
       : null;
 
-  const peak = design.supply ? supplyPeakVoltage(design.supply) : null;
+  const bridge = design.supply?.kind === 'solid-state';
+  const peak = design.supply && !bridge ? supplyPeakVoltage(design.supply) : null;
   let tank: BuildSheet['tank'] = null;
-  if (design.tank && result.tank) {
+  if (design.tank && result.tank && bridge) {
+    // no bleeders and no charged-bank figures: the burst sets the bank's stress (the drive section)
+    const t = design.tank;
+    const bank: BankLayout | null = t.kind === 'bank' ? { ...layout(t.unitCapacitance, t.unitVoltage, t.series, t.parallel, null, false) } : null;
+    tank = { capacitance: result.tank.capacitance, energyAtSupplyPeak: null, bank };
+  } else if (design.tank && result.tank) {
     const t = design.tank;
     const bank: BankLayout | null =
       t.kind === 'bank'
@@ -177,6 +215,7 @@ export function buildSheet(design: DesignSI, result: Result, options: BuildSheet
       : null;
 
   return {
+    drive: driveSheet(result),
     options: opts,
     secondary: {
       formDiameter: s.formDiameter,
@@ -240,4 +279,59 @@ export function suggestBank(capacitance: number, peak: number): BankLayout {
   const series = Math.max(1, Math.ceil((BANK_RATING_FACTOR * peak) / u.voltage));
   const parallel = Math.max(1, Math.round((capacitance * series) / u.capacitance));
   return layout(u.capacitance, u.voltage, series, parallel, peak, true);
+}
+
+/** The smallest listed 1:N that keeps `current / N` at or below `out` (the largest listed when none does). */
+export function ctRatio(current: number, out: number): number {
+  return CT_RATIOS.find((n) => current / n <= out) ?? CT_RATIOS[CT_RATIOS.length - 1];
+}
+
+/**
+ * The drive part of the sheet from the solver's burst: the bank as simulated, the bus capacitor (with the
+ * capacitance for a 5 % droop, from C·V·ΔV ≈ energy per burst), the current transformers (ratios by the
+ * trade's rule of thumb above) and the primary conductor's heat, I²R at the drive frequency.
+ */
+export function driveSheet(result: Result): DriveSheet | null {
+  const d = result.drive;
+  if (!d) return null;
+  const trip = d.currentLimit ?? d.peakPrimaryCurrent;
+  const tripRatio = ctRatio(trip, TRIP_CT_OUT);
+  const feedbackRatio = ctRatio(d.peakPrimaryCurrent, FEEDBACK_CT_MAX_OUT);
+  const rms = d.capacitorRmsCurrent;
+  const b = d.bank;
+  return {
+    topology: d.topology,
+    bridge: d.bridge,
+    busVoltage: d.busVoltage,
+    onTime: d.onTime,
+    repetitionRate: d.repetitionRate,
+    peakPrimaryCurrent: d.peakPrimaryCurrent,
+    surgeImpedance: d.surgeImpedance,
+    primaryFrequency: d.primaryFrequency,
+    capacitorPeakVoltage: d.capacitorPeakVoltage,
+    capacitorRmsCurrent: rms,
+    bank: b
+      ? {
+          series: b.series,
+          parallel: b.parallel,
+          unitCapacitance: d.circuit.C1 === null ? 0 : (d.circuit.C1 * b.series) / b.parallel,
+          unitVoltage: b.unitVoltage,
+          unitPeakVoltage: b.unitPeakVoltage,
+          voltageMargin: b.voltageMargin,
+          stringRmsCurrent: b.stringRmsCurrent,
+          stringPeakCurrent: b.stringPeakCurrent,
+          unitRmsCurrent: b.unitRmsCurrent,
+          currentMargin: b.currentMargin,
+        }
+      : null,
+    bus: {
+      capacitance: d.busEnergy === null ? null : (2 * d.busEnergy) / (d.busVoltage * d.busVoltage),
+      energy: d.busEnergy,
+      droop: d.busDroop,
+      suggestedCapacitance: d.burstEnergy / (BUS_DROOP_TARGET * d.busVoltage * d.busVoltage),
+    },
+    feedbackCt: { ratio: feedbackRatio, outputPeak: d.peakPrimaryCurrent / feedbackRatio },
+    tripCt: { ratio: tripRatio, outputAtTrip: trip / tripRatio, trip },
+    conductor: { rmsCurrent: rms, acResistance: d.circuit.R1, heat: rms === null ? null : rms * rms * d.circuit.R1 },
+  };
 }

@@ -5,6 +5,8 @@ export interface ChecklistItem {
   text: string;
   hazard: HazardId;
   source: string;
+  /** only for one family of coil; absent: for every coil */
+  family?: 'spark-gap' | 'solid-state';
 }
 
 const TROUPE = 'professional performing troupe practice (Make: magazine)';
@@ -31,11 +33,43 @@ export const eventChecklist: ChecklistItem[] = [
     text: 'Tank capacitors fitted with bleeders; grounded shorting stick at hand; no one touches the bank until each capacitor is shorted.',
     hazard: 'stored-energy',
     source: 'Tesla Coil Mailing List, 1999 and 2000',
+    family: 'spark-gap',
+  },
+  {
+    text: 'Bus capacitors discharged through a resistor and checked with a meter before anyone reaches into the driver; the bus bleeder fitted and tested.',
+    hazard: 'rectified-bus',
+    source: 'common practice of solid-state coil builders',
+    family: 'solid-state',
+  },
+  {
+    text: 'Interrupter linked to the controller by optical fibre only; the operator handles no wire that reaches the bridge.',
+    hazard: 'rectified-bus',
+    source: 'common practice of solid-state coil builders',
+    family: 'solid-state',
+  },
+  {
+    text: 'Over-current trip set and checked with a current transformer at low bus voltage; interrupter limited to the on-time and repetition rate the design was checked at.',
+    hazard: 'rectified-bus',
+    source: 'common practice of solid-state coil builders',
+    family: 'solid-state',
+  },
+  {
+    text: 'Scopes and meters on the driver connected through isolation (current transformer, isolated or differential probe), never a grounded probe on the bridge.',
+    hazard: 'rectified-bus',
+    source: 'common practice of solid-state coil builders',
+    family: 'solid-state',
   },
   {
     text: 'Dedicated RF ground connected: secondary base, strike rail, safety gaps and transformer case; control electronics on the mains ground.',
     hazard: 'interference',
     source: 'Tesla Coil Mailing List, 1999',
+    family: 'spark-gap',
+  },
+  {
+    text: 'Dedicated RF ground connected: secondary base and strike rail; the driver and its controller on the mains safety earth, not the RF ground.',
+    hazard: 'interference',
+    source: 'Tesla Coil Mailing List, 1999; common practice of solid-state coil builders',
+    family: 'solid-state',
   },
   {
     text: 'Room ventilated for ozone and nitrogen oxides; pauses of a few minutes between runs.',
@@ -48,7 +82,7 @@ export const eventChecklist: ChecklistItem[] = [
     hazard: 'implants',
     source: 'Tesla Coil Mailing List, 2000',
   },
-  { text: 'Spark gap enclosed; no one looks into it while it fires.', hazard: 'uv', source: 'community safety warning page' },
+  { text: 'Spark gap enclosed; no one looks into it while it fires.', hazard: 'uv', source: 'community safety warning page', family: 'spark-gap' },
   {
     text: 'Fire extinguisher rated for electrical fires beside the operators; flammable material cleared from the strike area.',
     hazard: 'fire',
@@ -65,3 +99,9 @@ export const eventChecklist: ChecklistItem[] = [
     source: 'Teslathon visitor rules, 2016',
   },
 ];
+
+/** The checklist for one kind of supply: the items for every coil and those of its family. */
+export function eventChecklistFor(supplyKind: 'transformer' | 'solid-state' | null): ChecklistItem[] {
+  const family = supplyKind === 'solid-state' ? 'solid-state' : 'spark-gap';
+  return eventChecklist.filter((i) => i.family === undefined || i.family === family);
+}

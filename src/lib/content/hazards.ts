@@ -6,6 +6,7 @@
 
 export type HazardId =
   | 'supply'
+  | 'rectified-bus'
   | 'stored-energy'
   | 'rf-burns'
   | 'ozone'
@@ -56,6 +57,25 @@ export const hazards: Hazard[] = [
           'Do not defeat it. If it trips, choose a supply intended for the job and get professional advice.',
         source: `${LIST}, 2002 (NEC 1999 / UL 2161)`,
       },
+    ],
+  },
+  {
+    id: 'rectified-bus',
+    title: 'Rectified-mains bus of a solid-state driver',
+    risk:
+      'A solid-state driver rectifies the mains onto a DC bus of a few hundred volts with no isolation: the bridge, its gate drivers and ' +
+      'anything clipped to them sit at mains potential, and the bus capacitors hold a lethal charge for minutes after switch-off.',
+    precautions: [
+      {
+        text: 'After switch-off, discharge the bus capacitors through a power resistor and check with a meter before touching the bridge.',
+        source: 'common practice of solid-state coil builders',
+      },
+      {
+        text: 'Measure through isolation: a current transformer on the primary, an isolated or differential probe on the bridge; never a grounded scope clipped to the bus.',
+        source: 'common practice of solid-state coil builders',
+      },
+      { text: 'Run the interrupter to the controller over optical fibre, so no wire links the operator to the bridge.', source: 'common practice of solid-state coil builders' },
+      { text: 'Feed the bridge through a fuse and an isolating switch you can reach; bring the bus up slowly (a variac or a soft-start) the first time.', source: 'common practice of solid-state coil builders' },
     ],
   },
   {

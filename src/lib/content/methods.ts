@@ -339,6 +339,34 @@ export const methodNotes: MethodNote[] = [
     notModelled: ['Gap losses and quenching', 'Resonant rise and transformer saturation', 'Power factor and mains wiring', 'Protection filters and safety gaps', 'Capacitor heating and ageing'],
   },
   {
+    id: 'bridge-burst',
+    aliases: ['drive', 'solid-state'],
+    title: 'Bridge-driven coils: the burst',
+    gives:
+      'for a solid-state supply: the surge impedance and frequency of the primary at the tap, the peak primary current at the end of the on-time, when the trip or the switches’ rating is reached, the tank’s peak voltage and RMS current and each capacitor’s share, the secondary’s unloaded peak voltage, the energy per burst, average power, duty cycle and bus droop',
+    formulas: [
+      'L<sub>1</sub> i<sub>1</sub>′ + M i<sub>2</sub>′ = v<sub>b</sub> − R<sub>1</sub> i<sub>1</sub> − q<sub>1</sub>/C<sub>1</sub>,   M i<sub>1</sub>′ + L<sub>2</sub> i<sub>2</sub>′ = −R<sub>2</sub> i<sub>2</sub> − q<sub>2</sub>/C<sub>2</sub>',
+      'v<sub>b</sub> = +V while i<sub>1</sub> ≥ 0, −V while i<sub>1</sub> &lt; 0 (V = bus, or bus/2 for a half bridge), from rest at t = 0 to the on-time',
+      'tap: primary + tank tuned to ratio × f<sub>target</sub>;  Z<sub>0</sub> = √(L<sub>1</sub>/C<sub>1</sub>)',
+      'uncoupled, lossless check: envelope 2Vt/(πL<sub>1</sub>)',
+      'each capacitor: V<sub>peak</sub>/series and I<sub>rms</sub>/parallel;  duty = on-time × rate;  P = E<sub>burst</sub> × rate',
+    ],
+    assumptions: [
+      'The primary at the tap (its inductance, the mutual inductance to the secondary, the tank) coupled to the secondary’s equivalent L and C at the top, with the streamer allowance.',
+      'Resistances: the primary conductor’s skin-effect resistance (a solid round conductor) and the secondary wire’s AC resistance; switch, capacitor and streamer losses are left out.',
+      'Ideal zero-current switching: the bridge follows the sign of the primary current with no delay.',
+    ],
+    range: 'Dual-resonant (primary tank) and single-resonant (no tank) coils with a full or half bridge.',
+    accuracy:
+      'The integration is checked against the closed-form envelope and an independent scipy integration (see /validation). The secondary voltage is an upper bound: streamers load the secondary and lower it.',
+    references: [
+      { text: 'Series RLC driven at resonance by a square wave: fundamental 4V/π, envelope 2Vt/(πL) (any circuits text)', mark: 'confirmed numerically' },
+      { text: 'Primary tuned below the secondary, about 0.85–0.95 × (builders of dual-resonant coils)', mark: 'common practice' },
+      { text: 'Current-transformer ratios and trip practice of bridge-driven coils', mark: 'common practice' },
+    ],
+    notModelled: ['Streamer load and its frequency pull', 'Switching losses, dead time and feedback delay', 'Capacitor ESR and heating', 'Bus ripple from the rectifier and the mains'],
+  },
+  {
     id: 'spark-length',
     aliases: [],
     title: 'Spark length',

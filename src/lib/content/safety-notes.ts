@@ -2,7 +2,7 @@
  * Wording of the safety notes shown beside the numbers they concern. Shared by SafetyNote.astro and
  * SafetyNote.tsx so server pages and islands say exactly the same thing. Plain and factual on purpose.
  */
-export type SafetyKind = 'stored-energy' | 'supply' | 'rf' | 'general';
+export type SafetyKind = 'stored-energy' | 'supply' | 'bus' | 'rf' | 'general';
 
 export type SafetyText = { title: string; body: string };
 
@@ -18,6 +18,14 @@ export const safetyNotes: Record<SafetyKind, SafetyText> = {
     body:
       'The supply delivers voltages that can kill, and it may give no sign of being on. Never adjust anything with power on; unplug it rather than trusting a switch. ' +
       'Use a key switch and proper fusing, ground all metal cases, and never work alone. Ground-fault protection on a supply is a safety feature: do not defeat it.',
+  },
+  bus: {
+    title: 'Rectified-mains bus',
+    body:
+      'A bridge-driven coil rectifies the mains straight onto its bus: the bridge, its drivers and the bus sit at mains potential, and the bus ' +
+      'capacitors hold a lethal charge after switch-off. Discharge them through a resistor and check with a meter before touching. Measure ' +
+      'through isolation (a current transformer, an isolated or differential probe), never with a grounded scope clipped to the bridge, ' +
+      'and run the interrupter to the controller over optical fibre.',
   },
   rf: {
     title: 'RF burns and interference',

@@ -43,17 +43,29 @@ export const exampleDesigns: readonly ExampleDesign[] = [
   },
   {
     id: 'solid-state-helical',
-    name: 'Solid-state coil with a helical primary',
+    name: 'Dual-resonant solid-state coil with a helical primary',
     description:
-      'A solid-state (bridge-driven) coil: 6 in form, 1100 turns of 24 AWG, a 30 × 8 in toroid, an 8-turn helical ' +
-      'primary around the base and a 167 nF bank on a 340 V bus.',
+      'A bridge-driven (dual-resonant) coil: 6 in form, 1100 turns of 24 AWG, a 30 × 8 in toroid, an 8-turn helical ' +
+      'primary around the base and a 150 nF bank (4 in series × 4) driven by a full bridge from a 340 V bus, 50 µs bursts ' +
+      'at 150 per second with a 600 A trip, the primary tuned to 0.9 × the secondary.',
     design: {
       secondary: { formDiameter: '6 in', turns: 1100, wire: { awg: 24, insulation: 'heavy' }, elevation: '2 in' },
       groundClearance: '0.5 m',
       topload: { shape: 'toroid', majorDiameter: '30 in', minorDiameter: '8 in', elevation: '4 in' },
       primary: { shape: 'helical', innerDiameter: '10 in', turns: 8, conductorDiameter: '0.25 in', spacing: '0.25 in' },
-      tank: { unitCapacitance: '0.5 uF', unitVoltage: '2 kV', series: 3, parallel: 1 },
-      supply: { kind: 'solid-state', busVoltage: '340 V' },
+      tank: { unitCapacitance: '150 nF', unitVoltage: '2 kV', series: 4, parallel: 4, unitRmsCurrent: '10 A' },
+      supply: {
+        kind: 'solid-state',
+        busVoltage: '340 V',
+        topology: 'dual-resonant',
+        bridge: 'full',
+        onTime: '50 us',
+        repetitionRate: '150 Hz',
+        switchPeakCurrent: '1000 A',
+        currentLimit: '600 A',
+        busCapacitance: '3300 uF',
+        tuningRatio: 0.9,
+      },
       tuning: { streamerCapacitance: '6 pF' },
     },
   },

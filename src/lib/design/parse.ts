@@ -3,10 +3,11 @@ import { awgDiameter } from '../../solver/wire/awg';
 import { insulatedDiameter } from '../../solver/wire/insulation';
 import { checkDesign } from '../../solver/system/checks';
 import { streamerCapacitanceForLength } from '../../solver/tuning/streamer';
-import type { DesignIssue, DesignSI, FormerSI, PrimarySI, StrikeRailSI, SupplySI, TankSI, ToploadSI } from '../../solver/types';
+import type { DesignIssue, DesignSI, FormerSI, PrimarySI, SolidStateSupplySI, StrikeRailSI, SupplySI, TankSI, ToploadSI } from '../../solver/types';
 import { DEFAULT_FORMER, FORMER_PERMITTIVITY } from '../../solver/field/former';
 import { si } from './fields';
 import { designInputSchema, KNOWN_FIELDS, type DesignInput } from './schema';
+import { SOLID_STATE_DEFAULTS } from './registry';
 
 export type { DesignSI, DesignIssue };
 
@@ -82,6 +83,7 @@ export function toDesignSI(d: DesignInput): DesignSI {
             unitVoltage: si(d.tank.unitVoltage, 'voltage'),
             series: d.tank.series,
             parallel: d.tank.parallel,
+            unitRmsCurrent: d.tank.unitRmsCurrent === undefined ? null : si(d.tank.unitRmsCurrent, 'current'),
           };
   }
 
@@ -96,7 +98,7 @@ export function toDesignSI(d: DesignInput): DesignSI {
             lineFrequency: si(d.supply.lineFrequency, 'frequency'),
             breakRate: d.supply.breakRate === undefined ? null : si(d.supply.breakRate, 'frequency'),
           }
-        : { kind: 'solid-state', busVoltage: si(d.supply.busVoltage, 'voltage') };
+        : solidStateSI(d.supply);
   }
 
   const f = s.former;
@@ -142,6 +144,32 @@ export function toDesignSI(d: DesignInput): DesignSI {
     tank,
     supply,
     tuning: { streamerCapacitance, streamerLength, targetCoupling: t.targetCoupling ?? null },
+  };
+}
+
+type SolidStateInput = Extract<NonNullable<DesignInput['supply']>, { kind: 'solid-state' }>;
+
+/** A solid-state supply in SI; fields left out take SOLID_STATE_DEFAULTS and are listed in `defaulted`. */
+export function solidStateSI(u: SolidStateInput): SolidStateSupplySI {
+  const defaulted: string[] = [];
+  const pick = <T>(name: string, given: T | undefined, fallback: T): T => {
+    if (given !== undefined) return given;
+    defaulted.push(name);
+    return fallback;
+  };
+  const D = SOLID_STATE_DEFAULTS;
+  return {
+    kind: 'solid-state',
+    busVoltage: si(u.busVoltage, 'voltage'),
+    topology: pick('topology', u.topology, D.topology),
+    bridge: pick('bridge', u.bridge, D.bridge),
+    onTime: pick('onTime', u.onTime === undefined ? undefined : si(u.onTime, 'time'), D.onTime),
+    repetitionRate: pick('repetitionRate', u.repetitionRate === undefined ? undefined : si(u.repetitionRate, 'frequency'), D.repetitionRate),
+    switchPeakCurrent: u.switchPeakCurrent === undefined ? null : si(u.switchPeakCurrent, 'current'),
+    currentLimit: u.currentLimit === undefined ? null : si(u.currentLimit, 'current'),
+    busCapacitance: u.busCapacitance === undefined ? null : si(u.busCapacitance, 'capacitance'),
+    tuningRatio: pick('tuningRatio', u.tuningRatio, D.tuningRatio),
+    defaulted,
   };
 }
 

@@ -12,6 +12,17 @@ import type { QuantityKind } from '../format/units';
 
 const DEG = Math.PI / 180;
 
+/** Primary frequency over the secondary's when a solid-state design gives none (common practice for dual-resonant coils). */
+export const DEFAULT_TUNING_RATIO = 0.9;
+/** What a solid-state supply saved with fewer fields takes for the rest (common practice), in SI. */
+export const SOLID_STATE_DEFAULTS = {
+  topology: 'dual-resonant',
+  bridge: 'full',
+  onTime: 100e-6,
+  repetitionRate: 200,
+  tuningRatio: DEFAULT_TUNING_RATIO,
+} as const;
+
 /** A quantity kind (a value with a unit), or a plain number, or one of a few words. */
 export type FieldKind = QuantityKind | 'count' | 'ratio' | 'gauge' | 'choice';
 
@@ -374,6 +385,16 @@ export const DESIGN_FIELDS = [
     default: '1',
   },
   {
+    path: 'tank.unitRmsCurrent',
+    kind: 'current',
+    label: 'RMS current rating of each capacitor',
+    help: "each capacitor's RMS current rating from its data sheet; optional, checked against the bank's RMS current with a solid-state supply",
+    hint: 'e.g. "10 A"; empty when unknown',
+    bounds: { min: 1e-3, max: 1e4, minInclusive: true, label: 'between 1 mA and 10 kA' },
+    optional: true,
+    default: '',
+  },
+  {
     path: 'supply.kind',
     kind: 'choice',
     label: 'Supply',
@@ -429,6 +450,90 @@ export const DESIGN_FIELDS = [
     hint: 'e.g. "340 V"',
     bounds: supplyVoltageBounds,
     default: '340 V',
+  },
+  {
+    path: 'supply.topology',
+    kind: 'choice',
+    label: 'Drive topology',
+    help: 'dual-resonant: the bridge drives a primary tank tuned below the secondary; single-resonant: the bridge drives a few primary turns with no tank, at the secondary frequency; default dual-resonant',
+    options: [
+      { value: 'dual-resonant', label: 'Dual-resonant (primary tank)' },
+      { value: 'single-resonant', label: 'Single-resonant (no primary tank)' },
+    ],
+    optional: true,
+    default: 'dual-resonant',
+  },
+  {
+    path: 'supply.bridge',
+    kind: 'choice',
+    label: 'Bridge',
+    help: 'full bridge (applies ±bus) or half bridge (applies ±bus/2); default full',
+    options: [
+      { value: 'full', label: 'Full bridge (±bus)' },
+      { value: 'half', label: 'Half bridge (±bus/2)' },
+    ],
+    optional: true,
+    default: 'full',
+  },
+  {
+    path: 'supply.onTime',
+    kind: 'time',
+    label: 'Interrupter on-time',
+    help: 'length of each burst set by the interrupter; default 100 µs (common practice)',
+    hint: 'e.g. "150 us"; empty for 100 µs',
+    bounds: { min: 1e-6, max: 20e-3, minInclusive: true, label: 'between 1 µs and 20 ms' },
+    optional: true,
+    default: '100 us',
+  },
+  {
+    path: 'supply.repetitionRate',
+    kind: 'frequency',
+    label: 'Interrupter repetition rate',
+    help: 'bursts per second; default 200 Hz (common practice)',
+    hint: 'e.g. "200 Hz"; empty for 200 Hz',
+    bounds: { min: 0.1, max: 5e3, minInclusive: true, label: 'between 0.1 Hz and 5 kHz' },
+    optional: true,
+    default: '200 Hz',
+  },
+  {
+    path: 'supply.switchPeakCurrent',
+    kind: 'current',
+    label: 'Switch pulsed current rating',
+    help: "the switches' pulsed (peak) current rating; optional",
+    hint: 'e.g. "600 A"; from the switch data sheet',
+    bounds: { min: 0.1, max: 1e5, minInclusive: true, label: 'between 0.1 A and 100 kA' },
+    optional: true,
+    default: '',
+  },
+  {
+    path: 'supply.currentLimit',
+    kind: 'current',
+    label: 'Over-current trip setting',
+    help: 'the peak primary current at which the controller ends the burst; optional',
+    hint: 'e.g. "450 A"; empty for no trip',
+    bounds: { min: 0.1, max: 1e5, minInclusive: true, label: 'between 0.1 A and 100 kA' },
+    optional: true,
+    default: '',
+  },
+  {
+    path: 'supply.busCapacitance',
+    kind: 'capacitance',
+    label: 'Bus capacitance',
+    help: 'capacitance across the DC bus; optional, needed for the bus droop',
+    hint: 'e.g. "3300 uF"',
+    bounds: { min: 1e-7, max: 10, minInclusive: true, label: 'between 0.1 µF and 10 F' },
+    optional: true,
+    default: '',
+  },
+  {
+    path: 'supply.tuningRatio',
+    kind: 'ratio',
+    label: 'Primary to secondary frequency ratio',
+    help: `primary (tank) frequency over the secondary's loaded frequency; default ${DEFAULT_TUNING_RATIO} (common practice)`,
+    hint: `e.g. 0.9; empty for ${DEFAULT_TUNING_RATIO}`,
+    bounds: { min: 0.5, max: 1.5, minInclusive: true, label: 'between 0.5 and 1.5' },
+    optional: true,
+    default: String(DEFAULT_TUNING_RATIO),
   },
   {
     path: 'tuning.streamerCapacitance',

@@ -109,6 +109,7 @@ export const tankBankSchema = z.strictObject({
   unitVoltage: quantityField('tank.unitVoltage'),
   series: numberField('tank.series'),
   parallel: numberField('tank.parallel'),
+  unitRmsCurrent: quantityField('tank.unitRmsCurrent').optional(),
 });
 
 export const tankSchema = z.union([tankSingleSchema, tankBankSchema], {
@@ -127,6 +128,20 @@ export const transformerSupplySchema = z.strictObject({
 export const solidStateSupplySchema = z.strictObject({
   kind: z.literal('solid-state'),
   busVoltage: quantityField('supply.busVoltage'),
+  topology: z
+    .enum(['dual-resonant', 'single-resonant'], { error: () => 'expected "dual-resonant" or "single-resonant"' })
+    .describe(designField('supply.topology').help)
+    .optional(),
+  bridge: z
+    .enum(['full', 'half'], { error: () => 'expected "full" or "half"' })
+    .describe(designField('supply.bridge').help)
+    .optional(),
+  onTime: quantityField('supply.onTime').optional(),
+  repetitionRate: quantityField('supply.repetitionRate').optional(),
+  switchPeakCurrent: quantityField('supply.switchPeakCurrent').optional(),
+  currentLimit: quantityField('supply.currentLimit').optional(),
+  busCapacitance: quantityField('supply.busCapacitance').optional(),
+  tuningRatio: numberField('supply.tuningRatio').optional(),
 });
 
 export const supplySchema = z.discriminatedUnion('kind', [transformerSupplySchema, solidStateSupplySchema], {

@@ -12,6 +12,20 @@ export const MEASUREMENT_KINDS = {
   'tap-position': { label: 'Best tap found', unit: 'turns', instrument: 'tap sweep at low power', bench: 'tapTurns' },
   'wound-turns': { label: 'Secondary turns wound', unit: 'turns', instrument: 'turn counter checked against the winding height', bench: 'woundTurns' },
   'winding-length': { label: 'Secondary winding length, measured', unit: 'm', instrument: 'steel rule or tape', bench: 'windingLength' },
+  // solid-state coils (common practice of bridge-driven coils)
+  'primary-ring-frequency': {
+    label: 'Primary ring-down frequency, bridge disconnected',
+    unit: 'Hz',
+    instrument: 'pulse into the tank, scope on a current transformer',
+    bench: 'primaryRingFrequency',
+  },
+  'peak-primary-current': {
+    label: 'Peak primary current at the end of the on-time',
+    unit: 'A',
+    instrument: 'current transformer and scope',
+    bench: 'peakPrimaryCurrent',
+  },
+  'trip-setting': { label: 'Trip setting as measured', unit: 'A', instrument: 'controller setting, checked with a current transformer', bench: 'tripSetting' },
 } as const satisfies Record<string, { label: string; unit: string; instrument: string; bench: keyof BenchValues }>;
 
 export type MeasurementKind = keyof typeof MEASUREMENT_KINDS;
@@ -39,6 +53,12 @@ export function predictionFor(kind: MeasurementKind, result: Result | null): num
       return result.secondary ? Math.round(result.secondary.windingLength / result.secondary.pitch) : null;
     case 'winding-length':
       return result.secondary?.windingLength ?? null;
+    case 'primary-ring-frequency':
+      return result.drive?.primaryFrequency ?? null;
+    case 'peak-primary-current':
+      return result.drive?.peakPrimaryCurrent ?? null;
+    case 'trip-setting':
+      return result.drive?.currentLimit ?? null;
   }
 }
 

@@ -17,6 +17,16 @@ export const TOPLOAD_MIN_RATIO = 2.5;
 export const PRIMARY_CLEARANCE_MIN = 1 * INCH;
 export const SPARK_SHORTFALL = 0.5;
 export const TOPLOAD_LARGE_FACTOR = 1.5;
+/** The trip counts as firing early when it is reached before this share of the on-time (our threshold). */
+export const TRIP_EARLY_SHARE = 0.9;
+/** A measured peak within this share of the trip setting means the trip is what ends the bursts (our threshold). */
+export const TRIP_MEASURED_SHARE = 0.95;
+/** Feedback delay of a current transformer, gate drive and switches without compensation, about 150 ns (from memory). */
+export const FEEDBACK_DELAY = 150e-9;
+/** Phase lag above which the switches turn off with current still flowing: 10° of the primary period (common practice). */
+export const PHASE_LAG_MAX_DEG = 10;
+/** Bus droop over one burst above 10 % of the bus (common practice). */
+export const BUS_DROOP_MAX = 0.1;
 
 const pct = (x: number) => `${(x * 100).toFixed(1)} %`;
 const triggered = (finding: string): RuleOutcome => ({ status: 'triggered', finding });
@@ -24,6 +34,8 @@ const clear = (finding: string): RuleOutcome => ({ status: 'clear', finding });
 const unknown = (finding: string): RuleOutcome => ({ status: 'unknown', finding });
 const notApplicable = (finding: string): RuleOutcome => ({ status: 'not-applicable', finding });
 const isSparkGap = (ctx: TroubleshootContext) => ctx.design.supply?.kind !== 'solid-state';
+const current = (a: number) => `${sig(a, 3)} A`;
+const micro = (t: number) => `${sig(t * 1e6, 3)} µs`;
 
 /** The k to judge: measured, then adopted, then the prediction at the tap, then with all turns. */
 function couplingOf(ctx: TroubleshootContext): { k: number; from: string } | null {
@@ -65,6 +77,7 @@ export const RULES: readonly Rule[] = [
     source: 'tune the primary a little below the loaded secondary, about 5–10 % (hvtesla.com/tuning.html; TCML 2001/May/msg00905)',
     nextCheck: 'Move the tap: outward (more turns) when the primary is above the secondary, inward when far below; re-measure the inductance at the tap.',
     evaluate(ctx) {
+      if (!isSparkGap(ctx)) return notApplicable('For a bridge-driven coil see the rule on the primary tuned above the secondary.');
       const L = ctx.bench.primaryInductance;
       const C = ctx.calibration.tankCapacitance ?? ctx.result.tank?.capacitance;
       const fs = ctx.bench.loadedFrequency ?? ctx.result.system?.resonantFrequency;
@@ -163,6 +176,7 @@ export const RULES: readonly Rule[] = [
     source: 'common practice, no primary source found',
     nextCheck: 'With the power off and the bank shorted, check each capacitor; add units in series.',
     evaluate(ctx) {
+      if (!isSparkGap(ctx)) return notApplicable('A bridge does not charge the bank to the bus; see the rule on the bank in the burst.');
       const t = ctx.result.tank;
       if (!t) return unknown('The design has no tank.');
       if (t.ratingMargin === null) return unknown('The design gives only a capacitance, no voltage rating; give the bank as units.');
@@ -293,4 +307,112 @@ export const RULES: readonly Rule[] = [
       return m < SPARK_SHORTFALL * est ? triggered(text) : clear(text);
     },
   },
+  {
+    id: 'trip-early',
+    symptoms: ['short-sparks', 'supply-trips'],
+    cause: 'The over-current trip ends the bursts before the on-time',
+    threshold: `the primary current reaches the trip before ${pct(TRIP_EARLY_SHARE)} of the on-time, or a measured peak within ${pct(1 - TRIP_MEASURED_SHARE)} of the trip setting`,
+    source: 'the burst simulation (peak current against time); the shares are our thresholds',
+    nextCheck: 'Shorten the on-time to what the trip allows, or lower the bus voltage or raise the surge impedance (less tank capacitance); raise the trip only within the switches’ pulsed rating.',
+    evaluate(ctx) {
+      const d = ctx.result.drive;
+      if (isSparkGap(ctx)) return notApplicable('This rule is for bridge-driven coils.');
+      if (!d) return unknown('The design has no simulated burst (it needs a primary, and a tank for a dual-resonant coil).');
+      const trip = ctx.bench.tripSetting ?? d.currentLimit;
+      if (trip === null) return unknown('No trip setting in the design or the bench log.');
+      const measured = ctx.bench.peakPrimaryCurrent;
+      if (measured !== undefined && measured >= TRIP_MEASURED_SHARE * trip) {
+        return triggered(`Measured peak ${current(measured)} is at the ${current(trip)} trip: the trip is ending the bursts.`);
+      }
+      const reached = timeToReach(d, trip);
+      if (reached !== null && reached < TRIP_EARLY_SHARE * d.onTime) {
+        return triggered(`The simulated current reaches the ${current(trip)} trip after ${micro(reached)} of the ${micro(d.onTime)} on-time.`);
+      }
+      return clear(`The simulated peak ${current(d.peakPrimaryCurrent)} stays below the ${current(trip)} trip through the ${micro(d.onTime)} on-time.`);
+    },
+  },
+  {
+    id: 'feedback-phase-lag',
+    symptoms: ['supply-trips'],
+    cause: 'Hard switching: the feedback lags the primary current, so the bridge switches with current flowing',
+    threshold: `feedback delay of about ${sig(FEEDBACK_DELAY * 1e9, 3)} ns (from memory) more than ${PHASE_LAG_MAX_DEG}° of the primary period, with no phase-lead compensation`,
+    source: 'zero-current switching needs the feedback in phase with the primary current (common practice); delay figure from memory',
+    nextCheck: 'Scope the gate drive against the primary current (through a current transformer) and add phase lead, or shorten the feedback path.',
+    question: 'phaseLead',
+    evaluate(ctx) {
+      const d = ctx.result.drive;
+      if (isSparkGap(ctx)) return notApplicable('This rule is for bridge-driven coils.');
+      if (!d) return unknown('The design has no simulated burst.');
+      const f = ctx.bench.primaryRingFrequency ?? d.primaryFrequency;
+      const lag = 360 * f * FEEDBACK_DELAY;
+      const text = `At ${frequency(f)} a ${sig(FEEDBACK_DELAY * 1e9, 3)} ns delay is ${sig(lag, 3)}° of a period.`;
+      if (lag <= PHASE_LAG_MAX_DEG) return clear(text);
+      const a = ctx.answers.phaseLead;
+      if (a === undefined) return unknown(`${text} Answer the question about phase-lead compensation.`);
+      return a ? clear(`${text} The feedback has phase-lead compensation.`) : triggered(`${text} The feedback has no phase-lead compensation.`);
+    },
+  },
+  {
+    id: 'bus-droop',
+    symptoms: ['short-sparks', 'supply-trips'],
+    cause: 'The bus sags during each burst',
+    threshold: `bus droop over one burst above ${pct(BUS_DROOP_MAX)} of the bus voltage`,
+    source: 'common practice of bridge-driven coil builders; the droop from the burst energy and the bus capacitance',
+    nextCheck: 'Add bus capacitance (rated for the ripple current), shorten the on-time, or check the rectifier and the mains feed.',
+    evaluate(ctx) {
+      const d = ctx.result.drive;
+      if (isSparkGap(ctx)) return notApplicable('This rule is for bridge-driven coils.');
+      if (!d) return unknown('The design has no simulated burst.');
+      if (d.busDroop === null) return unknown('Give the bus capacitance to compute the droop.');
+      const text = `The bus falls by ${sig(d.busDroop, 3)} V of ${sig(d.busVoltage, 3)} V (${pct(d.busDroop / d.busVoltage)}) over a burst.`;
+      return d.busDroop > BUS_DROOP_MAX * d.busVoltage ? triggered(text) : clear(text);
+    },
+  },
+  {
+    id: 'primary-above-secondary-bridge',
+    symptoms: ['short-sparks', 'supply-trips'],
+    cause: 'The primary is tuned above the secondary',
+    threshold: 'primary (measured ring-down with the bridge disconnected, or predicted) above the secondary (measured or predicted loaded frequency)',
+    source: 'dual-resonant coils tune the primary below the secondary, about 0.85–0.95 ×, since streamers pull the secondary down (common practice)',
+    nextCheck: 'Move the tap outward (more turns) or add tank capacitance, then measure the ring-down again with the bridge disconnected.',
+    evaluate(ctx) {
+      const d = ctx.result.drive;
+      if (isSparkGap(ctx)) return notApplicable('This rule is for bridge-driven coils.');
+      if (ctx.design.supply?.kind === 'solid-state' && ctx.design.supply.topology === 'single-resonant') return notApplicable('A single-resonant coil has no primary tank.');
+      const fp = ctx.bench.primaryRingFrequency ?? d?.primaryFrequency;
+      const fs = ctx.bench.loadedFrequency ?? ctx.result.tuning?.targetFrequency ?? ctx.result.system?.resonantFrequency;
+      if (fp === undefined || fs === undefined) return unknown('The design has no primary tank or secondary to compare.');
+      const which = (m: boolean) => (m ? 'measured' : 'predicted');
+      const text = `Primary ${frequency(fp)} (${which(ctx.bench.primaryRingFrequency !== undefined)}) against the secondary ${frequency(fs)} (${which(ctx.bench.loadedFrequency !== undefined)}): ratio ${sig(fp / fs, 3)}.`;
+      return fp > fs ? triggered(text) : clear(text);
+    },
+  },
+  {
+    id: 'bank-burst-stress',
+    symptoms: ['supply-trips', 'short-sparks'],
+    cause: 'The tank capacitors are overstressed in the burst (a failing capacitor detunes or shorts the tank)',
+    threshold: "each capacitor's share of the tank's peak voltage above its rating, or each string's RMS current above the capacitors' RMS rating",
+    source: 'the burst simulation against the capacitors’ data-sheet ratings (common practice)',
+    nextCheck: 'With the bus discharged, check each capacitor for heat and capacitance; add units in series for voltage and strings in parallel for current.',
+    evaluate(ctx) {
+      const d = ctx.result.drive;
+      if (isSparkGap(ctx)) return notApplicable('This rule is for bridge-driven coils.');
+      if (!d || d.capacitorPeakVoltage === null) return unknown('The design has no simulated tank.');
+      const b = d.bank;
+      if (!b) return unknown('The tank is given only as a capacitance; give it as a bank of capacitors with their ratings.');
+      const over: string[] = [];
+      if (b.voltageMargin < 1) over.push(`each capacitor sees ${sig(b.unitPeakVoltage, 3)} V peak against a ${sig(b.unitVoltage, 3)} V rating`);
+      if (b.currentMargin !== null && b.currentMargin < 1) over.push(`each string carries ${sig(b.stringRmsCurrent, 3)} A RMS against a ${sig(b.unitRmsCurrent!, 3)} A rating`);
+      if (over.length) return triggered(`In the burst ${over.join(', and ')}.`);
+      const cur = b.currentMargin === null ? ' (no RMS current rating given)' : `, ${sig(b.currentMargin, 3)} × the RMS current`;
+      return clear(`The capacitors are rated ${sig(b.voltageMargin, 3)} × their peak voltage${cur}.`);
+    },
+  },
 ];
+
+/** When the simulated primary current first reaches `level`, from the burst waveform; null if it never does. */
+function timeToReach(d: NonNullable<TroubleshootContext['result']['drive']>, level: number): number | null {
+  const w = d.waveform;
+  for (let i = 0; i < w.time.length; i++) if (Math.abs(w.primaryCurrent[i]) >= level) return w.time[i];
+  return null;
+}

@@ -17,8 +17,21 @@ export const QUESTIONS = {
   strikeRail: 'Is there a grounded strike rail just above and outside the primary, with a gap so it is not a closed ring?',
   breakoutPoint: 'Does the topload have a breakout point (a short rod or sharp point) where sparks can start?',
   groundFaultProtection: 'Does the transformer have built-in secondary ground-fault protection (labelled GFI or SCGFP)?',
+  phaseLead: "Does the driver's feedback have phase-lead compensation (or a measured feedback delay under 5 % of a primary period)?",
 } as const;
 export type QuestionId = keyof typeof QUESTIONS;
+
+/** Questions that belong to one kind of coil only: a bridge has no transformer, a spark gap no feedback. */
+const QUESTION_FAMILY: Partial<Record<QuestionId, 'spark-gap' | 'solid-state'>> = {
+  groundFaultProtection: 'spark-gap',
+  phaseLead: 'solid-state',
+};
+
+/** The questions to ask about a design with this kind of supply. */
+export function questionsFor(supplyKind: 'transformer' | 'solid-state' | null | undefined): QuestionId[] {
+  const family = supplyKind === 'solid-state' ? 'solid-state' : 'spark-gap';
+  return (Object.keys(QUESTIONS) as QuestionId[]).filter((q) => (QUESTION_FAMILY[q] ?? family) === family);
+}
 export type Answers = Partial<Record<QuestionId, boolean>>;
 
 /** The latest bench measurement of each kind, SI units. */
@@ -32,6 +45,9 @@ export interface BenchValues {
   tapTurns?: number;
   woundTurns?: number;
   windingLength?: number;
+  primaryRingFrequency?: number;
+  peakPrimaryCurrent?: number;
+  tripSetting?: number;
 }
 
 export interface TroubleshootContext {

@@ -5,7 +5,7 @@ import { measurementRows } from './measurements';
 import { requireSolved, solvedRow, type SolvedDesign } from './solve';
 import { readCalibration } from '../../lib/buildsheet';
 import { troubleshootQuerySchema, type TroubleshootQuery, type TroubleshootResponse } from '../../lib/api/contracts';
-import { QUESTIONS, SYMPTOMS, SYMPTOM_LABELS, benchValues, diagnose, type Answers, type QuestionId, type Symptom } from '../../lib/troubleshoot';
+import { QUESTIONS, SYMPTOMS, SYMPTOM_LABELS, benchValues, diagnose, questionsFor, type Answers, type QuestionId, type Symptom } from '../../lib/troubleshoot';
 
 export function parseTroubleshootQuery(url: URL): TroubleshootQuery {
   return parseQuery(url, troubleshootQuerySchema);
@@ -36,7 +36,7 @@ export async function troubleshootOf(d: SolvedDesign, q: TroubleshootQuery): Pro
   };
   const list: Symptom[] = q.symptom ? [q.symptom] : [...SYMPTOMS];
   return {
-    questions: (Object.keys(QUESTIONS) as QuestionId[]).map((id) => ({ id, text: QUESTIONS[id], answer: answers[id] ?? null })),
+    questions: questionsFor(design.supply?.kind).map((id) => ({ id, text: QUESTIONS[id], answer: answers[id] ?? null })),
     symptoms: list.map((symptom) => ({ symptom, label: SYMPTOM_LABELS[symptom], causes: diagnose(symptom, ctx) })),
   };
 }

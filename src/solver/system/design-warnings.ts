@@ -1,5 +1,5 @@
 import { primaryRings } from '../primary/geometry';
-import type { DesignSI, Result, SolverWarning } from '../types';
+import type { DesignSI, Result, SolidStateSupplySI, SolverWarning } from '../types';
 import { warning } from '../warnings';
 import { primaryParams, toploadOuterRadius } from './geometry';
 
@@ -128,8 +128,8 @@ export function designWarnings(d: DesignSI, r: Result): SolverWarning[] {
   }
 
   const tank = r.tank;
-  if (tank && supply && d.tank) {
-    const peak = supply.kind === 'transformer' ? Math.SQRT2 * supply.voltage : supply.busVoltage;
+  if (tank && supply && d.tank && supply.kind === 'transformer') {
+    const peak = Math.SQRT2 * supply.voltage;
     const ratingPath = d.tank.kind === 'bank' ? 'tank.unitVoltage' : 'tank';
     if (tank.voltageRating !== null && tank.voltageRating < peak) {
       out.push(
@@ -140,7 +140,7 @@ export function designWarnings(d: DesignSI, r: Result): SolverWarning[] {
             'the capacitors will fail, possibly violently. Add units in series.',
         ),
       );
-    } else if (supply.kind === 'transformer' && tank.voltageRating !== null && tank.voltageRating < BANK_RATING_FACTOR * peak) {
+    } else if (tank.voltageRating !== null && tank.voltageRating < BANK_RATING_FACTOR * peak) {
       out.push(
         warning(
           'bank_rating_low',
@@ -188,6 +188,89 @@ export function designWarnings(d: DesignSI, r: Result): SolverWarning[] {
         'secondary.turns',
         `The loaded frequency (${fmt(r.system.resonantFrequency / 1000)} kHz) is above the 35–500 kHz solid-state coils usually run at; ` +
           'switching losses rise with frequency (DRSSTC design guide, kaizerpowerelectronics.dk).',
+      ),
+    );
+  }
+  if (supply && supply.kind === 'solid-state') out.push(...driveWarnings(d, r, supply));
+  return out;
+}
+
+/** Labels of the solid-state fields a design may leave out, for the defaults warning (the registry's wording). */
+const DRIVE_FIELD_NAMES: Record<string, { label: string; value: (s: SolidStateSupplySI) => string }> = {
+  topology: { label: 'drive topology', value: (s) => s.topology },
+  bridge: { label: 'bridge', value: (s) => `${s.bridge} bridge` },
+  onTime: { label: 'interrupter on-time', value: (s) => `${fmt(s.onTime * 1e6)} µs` },
+  repetitionRate: { label: 'repetition rate', value: (s) => `${fmt(s.repetitionRate)} Hz` },
+  tuningRatio: { label: 'primary to secondary frequency ratio', value: (s) => fmt(s.tuningRatio) },
+};
+
+/** Usual bound on bus droop over one burst: 10 % of the bus (common practice). */
+export const BUS_DROOP_HIGH = 0.1;
+
+/** Warnings of a bridge-driven coil: defaults taken, the bank against the burst, droop, tuning above the secondary. */
+export function driveWarnings(d: DesignSI, r: Result, supply: SolidStateSupplySI): SolverWarning[] {
+  const out: SolverWarning[] = [];
+  const assumed = supply.defaulted.filter((f) => f in DRIVE_FIELD_NAMES && !(f === 'tuningRatio' && supply.topology === 'single-resonant'));
+  if (assumed.length > 0) {
+    out.push(
+      warning(
+        'drive_defaults_assumed',
+        'supply',
+        `The solid-state supply does not give its ${assumed.map((f) => DRIVE_FIELD_NAMES[f].label).join(', ')}; assumed ` +
+          `${assumed.map((f) => DRIVE_FIELD_NAMES[f].value(supply)).join(', ')} (common practice). Enter the coil's own values.`,
+      ),
+    );
+  }
+  const dr = r.drive;
+  if (!dr) return out;
+  const b = dr.bank;
+  if (b && b.voltageMargin < 1) {
+    out.push(
+      warning(
+        'bank_unit_voltage_exceeded',
+        'tank.unitVoltage',
+        `Each capacitor sees ${fmt(b.unitPeakVoltage)} V peak in the burst, above its ${fmt(b.unitVoltage)} V rating: ` +
+          'add capacitors in series (and strings in parallel to keep the capacitance), or shorten the on-time.',
+      ),
+    );
+  }
+  if (b && b.currentMargin !== null && b.currentMargin < 1) {
+    out.push(
+      warning(
+        'bank_unit_current_exceeded',
+        'tank.unitRmsCurrent',
+        `Each string carries ${fmt(b.stringRmsCurrent)} A RMS at this repetition rate, above the capacitors' ${fmt(b.unitRmsCurrent!)} A rating: ` +
+          'they will overheat. Add strings in parallel or lower the repetition rate or on-time.',
+      ),
+    );
+  }
+  if (d.tank && d.tank.kind === 'single' && dr.capacitorPeakVoltage !== null) {
+    out.push(
+      warning(
+        'tank_rating_unknown',
+        'tank',
+        `The tank sees ${fmt(dr.capacitorPeakVoltage / 1000)} kV peak and ${fmt(dr.capacitorRmsCurrent ?? 0)} A RMS in the burst; ` +
+          'give it as a bank of capacitors with their ratings to have them checked.',
+      ),
+    );
+  }
+  if (dr.busDroop !== null && dr.busDroop > BUS_DROOP_HIGH * dr.busVoltage) {
+    out.push(
+      warning(
+        'bus_droop_high',
+        'supply.busCapacitance',
+        `The bus falls by ${fmt(dr.busDroop)} V (${fmt((100 * dr.busDroop) / dr.busVoltage, 2)} %) over a burst, more than the ` +
+          `${100 * BUS_DROOP_HIGH} % builders usually allow (common practice): add bus capacitance or shorten the on-time.`,
+      ),
+    );
+  }
+  if (dr.topology === 'dual-resonant' && dr.frequencyRatio !== null && dr.frequencyRatio > 1) {
+    out.push(
+      warning(
+        'primary_above_secondary',
+        'supply.tuningRatio',
+        `The primary is tuned ${fmt((dr.frequencyRatio - 1) * 100, 2)} % above the secondary; dual-resonant coils are tuned ` +
+          'below it (about 0.85–0.95 ×, common practice), since streamers pull the secondary down.',
       ),
     );
   }

@@ -28,9 +28,27 @@ export function effectiveBreakRate(supply: SupplySI): number | null {
   return supply.breakRate ?? 2 * supply.lineFrequency;
 }
 
+export const SOLID_STATE_TANK_CAUTION =
+  'In a bridge-driven coil the tank rings to several kilovolts in each burst and the bank heats with its RMS current; ' +
+  'the bus capacitors beside the bridge stay charged after switch-off. Discharge and check with a meter before touching.';
+
 export function evaluateTank(tank: TankSI, supply: SupplySI | null): TankResult {
-  const peak = supply ? supplyPeakVoltage(supply) : null;
   const capacitance = tank.kind === 'single' ? tank.capacitance : bankCapacitance(tank.unitCapacitance, tank.series, tank.parallel);
+  if (supply?.kind === 'solid-state') {
+    // the tank is not charged from the bus: its stress comes from the burst (the drive section), not from ½CV² of the bus
+    return {
+      capacitance,
+      voltageRating: tank.kind === 'bank' ? bankVoltageRating(tank.unitVoltage, tank.series) : null,
+      energyAtSupplyPeak: null,
+      unitVoltage: tank.kind === 'bank' ? tank.unitVoltage : null,
+      units: tank.kind === 'bank' ? tank.series * tank.parallel : null,
+      perUnitVoltage: null,
+      ratingMargin: null,
+      bleeder: null,
+      caution: SOLID_STATE_TANK_CAUTION,
+    };
+  }
+  const peak = supply ? supplyPeakVoltage(supply) : null;
   const voltageRating = tank.kind === 'bank' ? bankVoltageRating(tank.unitVoltage, tank.series) : null;
   const perUnit = tank.kind === 'bank' && peak !== null ? perUnitVoltage(peak, tank.series) : null;
   return {
@@ -66,7 +84,7 @@ export function evaluateSupply(supply: SupplySI, tankCapacitance: number | null)
       ltrCapacitance: null,
       tankToResonantRatio: null,
       breakRate: null,
-      energyPerBang: tankCapacitance === null ? null : capacitorEnergy(tankCapacitance, peakVoltage),
+      energyPerBang: null,
       powerAtBreakRate: null,
       sparkLengthEstimate: null,
       sparkLengthPower: null,

@@ -123,6 +123,7 @@ export const TankPart = memo(function TankPart() {
           <Field path="tank.unitVoltage" />
           <Field path="tank.series" />
           <Field path="tank.parallel" />
+          <Field path="tank.unitRmsCurrent" />
         </div>
       )}
     </Part>
@@ -131,6 +132,7 @@ export const TankPart = memo(function TankPart() {
 
 export const SupplyPart = memo(function SupplyPart() {
   const kind = useWatch<FormValues, 'supply.kind'>({ name: 'supply.kind' });
+  const topology = useWatch<FormValues, 'supply.topology'>({ name: 'supply.topology' });
   return (
     <Part id="part-supply" title={title('supply')} ownPaths={['supply']}>
       <SelectField path="supply.kind" none="None yet" />
@@ -142,7 +144,19 @@ export const SupplyPart = memo(function SupplyPart() {
           <Field path="supply.breakRate" />
         </div>
       )}
-      {kind === 'solid-state' && <Field path="supply.busVoltage" />}
+      {kind === 'solid-state' && (
+        <div className="grid gap-3 sm:grid-cols-2">
+          <SelectField path="supply.topology" />
+          <SelectField path="supply.bridge" />
+          <Field path="supply.busVoltage" />
+          <Field path="supply.busCapacitance" />
+          <Field path="supply.onTime" />
+          <Field path="supply.repetitionRate" />
+          <Field path="supply.currentLimit" />
+          <Field path="supply.switchPeakCurrent" />
+          {topology !== 'single-resonant' && <Field path="supply.tuningRatio" />}
+        </div>
+      )}
     </Part>
   );
 });

@@ -130,6 +130,7 @@ export function fromDesignInput(d: DesignInput, name: string, system: UnitSystem
       v.tank.unitVoltage = Ot(d.tank.unitVoltage);
       v.tank.series = String(d.tank.series);
       v.tank.parallel = String(d.tank.parallel);
+      v.tank.unitRmsCurrent = Ot(d.tank.unitRmsCurrent);
     }
   }
   if (d.supply) {
@@ -140,8 +141,18 @@ export function fromDesignInput(d: DesignInput, name: string, system: UnitSystem
       v.supply.lineFrequency = Ot(d.supply.lineFrequency);
       v.supply.breakRate = Ot(d.supply.breakRate);
     } else {
+      const u = d.supply;
       v.supply.kind = 'solid-state';
-      v.supply.busVoltage = Ot(d.supply.busVoltage);
+      v.supply.busVoltage = Ot(u.busVoltage);
+      if (u.topology !== undefined) v.supply.topology = u.topology;
+      if (u.bridge !== undefined) v.supply.bridge = u.bridge;
+      // left out in a saved design: blank, so the stated default applies and its warning is shown
+      v.supply.onTime = Ot(u.onTime);
+      v.supply.repetitionRate = Ot(u.repetitionRate);
+      v.supply.switchPeakCurrent = Ot(u.switchPeakCurrent);
+      v.supply.currentLimit = Ot(u.currentLimit);
+      v.supply.busCapacitance = Ot(u.busCapacitance);
+      v.supply.tuningRatio = u.tuningRatio === undefined ? '' : String(u.tuningRatio);
     }
   }
   const t = d.tuning;
@@ -203,7 +214,13 @@ export function toDesignInput(v: FormValues): DesignInput {
     k.mode === 'single'
       ? { capacitance: k.capacitance.trim() }
       : k.mode === 'bank'
-        ? { unitCapacitance: k.unitCapacitance.trim(), unitVoltage: k.unitVoltage.trim(), series: num(k.series), parallel: num(k.parallel) }
+        ? withoutUndefined({
+            unitCapacitance: k.unitCapacitance.trim(),
+            unitVoltage: k.unitVoltage.trim(),
+            series: num(k.series),
+            parallel: num(k.parallel),
+            unitRmsCurrent: opt(k.unitRmsCurrent),
+          })
         : null;
   const u = v.supply;
   const supply =
@@ -216,7 +233,18 @@ export function toDesignInput(v: FormValues): DesignInput {
           breakRate: opt(u.breakRate),
         })
       : u.kind === 'solid-state'
-        ? { kind: 'solid-state' as const, busVoltage: u.busVoltage.trim() }
+        ? withoutUndefined({
+            kind: 'solid-state' as const,
+            busVoltage: u.busVoltage.trim(),
+            topology: u.topology,
+            bridge: u.bridge,
+            onTime: opt(u.onTime),
+            repetitionRate: opt(u.repetitionRate),
+            switchPeakCurrent: opt(u.switchPeakCurrent),
+            currentLimit: opt(u.currentLimit),
+            busCapacitance: opt(u.busCapacitance),
+            tuningRatio: opt(u.tuningRatio) === undefined ? undefined : num(u.tuningRatio),
+          })
         : null;
   const g = v.tuning;
   const tuning = withoutUndefined({

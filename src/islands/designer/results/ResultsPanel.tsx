@@ -5,12 +5,14 @@ import { SafetyNote } from '~/components/SafetyNote';
 import { FigureRow, Group } from './Row';
 import { TapCallout } from './TapCallout';
 import { FieldModelPanel } from './FieldModelPanel';
+import { DrivePanel } from './DrivePanel';
 
 type Props = { result: Result; system: UnitSystem; stale?: boolean };
 
 /** Every result of the solver, grouped the way a builder works through a coil. */
 export const ResultsPanel = memo(function ResultsPanel({ result: r, system, stale }: Props) {
   const band = r.uncertainty?.loadedFrequency;
+  const bridge = r.supply?.kind === 'solid-state';
   const ratio = r.secondary && r.system ? r.secondary.resonantFrequency / r.system.quarterWaveFrequency : null;
   return (
     <div className={`space-y-4 transition-opacity ${stale ? 'opacity-60' : ''}`} aria-busy={stale ? true : undefined}>
@@ -117,7 +119,9 @@ export const ResultsPanel = memo(function ResultsPanel({ result: r, system, stal
               {r.tank.voltageRating !== null && <FigureRow result={r} system={system} figure="tankVoltageRating" />}
               {r.tank.perUnitVoltage !== null && <FigureRow result={r} system={system} figure="perUnitVoltage" />}
               {r.tank.ratingMargin !== null && <FigureRow result={r} system={system} figure="ratingMargin" value={`${formatFixed(r.tank.ratingMargin, 2)}×`} />}
-              <FigureRow result={r} system={system} figure="tankEnergy" strong value={r.tank.energyAtSupplyPeak === null ? 'add a supply' : q(r.tank.energyAtSupplyPeak, 'energy')} />
+              {!bridge && (
+                <FigureRow result={r} system={system} figure="tankEnergy" strong value={r.tank.energyAtSupplyPeak === null ? 'add a supply' : q(r.tank.energyAtSupplyPeak, 'energy')} />
+              )}
               {r.tank.bleeder && (
                 <FigureRow result={r} system={system} figure="bleeder"
                   value={`${q(r.tank.bleeder.resistancePerUnit, 'resistance', { digits: 2 })}, ${q(r.tank.bleeder.powerPerUnit, 'power', { digits: 2 })}`}
@@ -125,6 +129,7 @@ export const ResultsPanel = memo(function ResultsPanel({ result: r, system, stal
                 />
               )}
               </dl>
+              {!bridge && (
               <SafetyNote kind="stored-energy" className="mt-2">
                 {r.tank.energyAtSupplyPeak !== null && (
                   <p className="mt-1" data-safety-figure="stored-energy">
@@ -132,6 +137,7 @@ export const ResultsPanel = memo(function ResultsPanel({ result: r, system, stal
                   </p>
                 )}
               </SafetyNote>
+              )}
             </>
           )}
           {r.supply && (
@@ -150,16 +156,20 @@ export const ResultsPanel = memo(function ResultsPanel({ result: r, system, stal
                 />
               )}
               </dl>
-              <SafetyNote kind="supply" className="mt-2">
-                <p className="mt-1" data-safety-figure="supply">
-                  This supply peaks at <strong>{q(r.supply.peakVoltage, 'voltage')}</strong>
-                  {r.supply.ratedPower !== null ? <> and can deliver {q(r.supply.ratedPower, 'power')}</> : null}.
-                </p>
-              </SafetyNote>
+              {!bridge && (
+                <SafetyNote kind="supply" className="mt-2">
+                  <p className="mt-1" data-safety-figure="supply">
+                    This supply peaks at <strong>{q(r.supply.peakVoltage, 'voltage')}</strong>
+                    {r.supply.ratedPower !== null ? <> and can deliver {q(r.supply.ratedPower, 'power')}</> : null}.
+                  </p>
+                </SafetyNote>
+              )}
             </div>
           )}
         </Group>
       )}
+
+      {bridge && <DrivePanel result={r} system={system} />}
 
       {r.warnings.length > 0 && (
         <section className="cw-card" aria-labelledby="res-warnings">

@@ -6,6 +6,9 @@ export function TapCallout({ result: r }: { result: Result }) {
   const t = r.tuning;
   const band = r.uncertainty?.loadedFrequency;
   const taps = r.uncertainty?.tapTurns;
+  const aim = t ? (t.primaryTargetFrequency ?? t.targetFrequency) : 0;
+  const ratio = t && t.targetFrequency > 0 ? aim / t.targetFrequency : 1;
+  const below = Math.abs(ratio - 1) > 1e-9 ? <> ({formatFixed(ratio, 2)} × the secondary&apos;s {q(t!.targetFrequency, 'frequency')})</> : null;
   if (!t) {
     return (
       <section className="rounded-xl border-2 border-dashed border-rule p-4 text-sm text-ink-soft" aria-label="Tap">
@@ -23,7 +26,7 @@ export function TapCallout({ result: r }: { result: Result }) {
           <p className="mt-1 text-4xl font-bold tabular-nums" data-result="tap">
             {formatFixed(t.tapTurns, 2)} <span className="text-xl font-semibold">turns</span>
           </p>
-          <p className="mt-1 text-sm">counted from the inner end of the primary, to tune it to {q(t.targetFrequency, 'frequency')}.</p>
+          <p className="mt-1 text-sm">counted from the inner end of the primary, to tune it to {q(aim, 'frequency')}{below}.</p>
           {taps && taps.low !== null && taps.high !== null && (
             <p className="mt-2 text-sm" data-result="tap-range">
               Search from <strong>{formatFixed(Math.min(taps.low, taps.high), 2)}</strong> to <strong>{formatFixed(Math.max(taps.low, taps.high), 2)}</strong> turns at low power
@@ -38,7 +41,7 @@ export function TapCallout({ result: r }: { result: Result }) {
         </>
       ) : (
         <p className="mt-1 text-lg font-semibold text-fault" data-result="tap">
-          The primary cannot reach {q(t.targetFrequency, 'frequency')} with this tank capacitor; see the primary's notes.
+          The primary cannot reach {q(aim, 'frequency')} with this tank capacitor; see the primary's notes.
         </p>
       )}
     </section>

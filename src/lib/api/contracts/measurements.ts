@@ -13,6 +13,9 @@ export const MEASUREMENT_RANGES: Record<MeasurementKind, { max: number; hint: st
   'tap-position': { max: 1000, hint: 'turns from the inner end' },
   'wound-turns': { max: 100000, hint: 'turns on the secondary' },
   'winding-length': { max: 10, hint: 'in metres, e.g. 0.56 for 560 mm' },
+  'primary-ring-frequency': { max: 100e6, hint: 'in hertz, e.g. 95000 for 95 kHz' },
+  'peak-primary-current': { max: 1e5, hint: 'in amperes, e.g. 400 for 400 A' },
+  'trip-setting': { max: 1e5, hint: 'in amperes, e.g. 450 for 450 A' },
 };
 
 export const measurementKindSchema = z.enum(MEASUREMENT_KIND_IDS, {

@@ -15,6 +15,7 @@ export const troubleshootQuerySchema = z.object({
   strikeRail: answer,
   breakoutPoint: answer,
   groundFaultProtection: answer,
+  phaseLead: answer,
 });
 
 const questionIds = Object.keys(QUESTIONS) as [keyof typeof QUESTIONS, ...(keyof typeof QUESTIONS)[]];
