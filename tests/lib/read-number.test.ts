@@ -71,3 +71,14 @@ describe('the one number rule', () => {
     if (bare && !bare.ok) expect(bare.message).toContain('without a unit');
   });
 });
+
+describe('messages in the builder\'s unit system', () => {
+  it('says metric lengths of a message in inches and feet in imperial, and leaves metric alone', async () => {
+    const { lengthsInSystem } = await import('../../src/lib/format/convert');
+    expect(lengthsInSystem('must be between 5 mm and 10 m, got "1 mm"', 'imperial')).toBe('must be between 0.197 in and 32.8 ft, got "0.0394 in"');
+    expect(lengthsInSystem('Height of z = 0 over the ground plane; empty for 0.5 m', 'imperial')).toBe('Height of z = 0 over the ground plane; empty for 19.7 in');
+    expect(lengthsInSystem('between −5 m and 5 m', 'imperial')).toBe('between −16.4 ft and 16.4 ft');
+    expect(lengthsInSystem('between 5 mm and 10 m', 'metric')).toBe('between 5 mm and 10 m');
+    expect(lengthsInSystem('expected a mass such as 3 kg', 'imperial')).toBe('expected a mass such as 3 kg');
+  });
+});

@@ -1,3 +1,4 @@
+import { issueText } from '~/lib/design/labels';
 import { useEffect, useMemo, useState } from 'react';
 import type { DesignInput } from '~/lib/design';
 import type { DesignIssue, DesignSI, Result } from '~/solver';
@@ -37,7 +38,7 @@ export default function DesignViewer({ name, design, result, unitSystem = 'metri
   if (!result || (parsed && !parsed.ok)) {
     return (
       <p className="cw-alert" role="status">
-        “{name}” can no longer be computed: {parsed && !parsed.ok ? parsed.issues.map((i) => `${i.path}: ${i.message}`).join('; ') : 'the solver gave no result'}.
+        “{name}” can no longer be computed: {parsed && !parsed.ok ? parsed.issues.map((i) => issueText(i)).join('; ') : 'the solver gave no result'}.
       </p>
     );
   }

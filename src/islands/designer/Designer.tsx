@@ -1,4 +1,5 @@
-import { useCallback, useEffect, useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { primaryInnerDefault } from '~/lib/design/defaults';
 import { FormProvider, useForm, useWatch } from 'react-hook-form';
 import { withApi } from '~/lib/api/provider';
 import type { DesignInput } from '~/lib/design';
@@ -87,6 +88,22 @@ function DesignerInner(props: DesignerProps) {
     clearNewDraft: draft.clearNew,
   });
 
+  // the primary's innermost turn follows the form until the builder types one of their own
+  const untouchedInner = useRef<string | null>(initial.primary.enabled ? null : initial.primary.innerDiameter);
+  const formText = values.secondary.formDiameter;
+  const innerText = values.primary.innerDiameter;
+  useEffect(() => {
+    if (untouchedInner.current === null || innerText !== untouchedInner.current) {
+      untouchedInner.current = null;
+      return;
+    }
+    const next = primaryInnerDefault(formText, system);
+    if (next && next !== innerText) {
+      untouchedInner.current = next;
+      setValue('primary.innerDiameter', next);
+    }
+  }, [formText, innerText, system, setValue]);
+
   const { clearServerIssues } = save;
   useEffect(() => clearServerIssues(), [inputKey, clearServerIssues]);
 
@@ -113,7 +130,9 @@ function DesignerInner(props: DesignerProps) {
   const switchUnits = useCallback(
     (next: UnitSystem) => {
       if (next === system) return;
-      reset(convertLengths(getValues(), next));
+      const converted = convertLengths(getValues(), next);
+      if (untouchedInner.current !== null) untouchedInner.current = converted.primary.innerDiameter;
+      reset(converted);
       setSaved((s) => (s ? convertLengths(s, next) : s));
       setBaseline((s) => convertLengths(s, next));
       convertAside(next);

@@ -118,7 +118,7 @@ export function GoalPanel({ input, system, hasPrimary, hasTank, readOnly, apply 
       <form onSubmit={onCoupling} className="grid gap-2 sm:grid-cols-[1fr_auto] sm:items-end">
         <div>
           <label htmlFor={ids.k} className="cw-label text-sm">
-            {designField('tuning.targetCoupling').label}
+            Coupling to reach (sets the secondary elevation)
           </label>
           <input id={ids.k} className="cw-input" value={k} onChange={(e) => setK(e.target.value)} placeholder="e.g. 0.15" inputMode="decimal" disabled={readOnly || !hasPrimary} autoComplete="off" />
         </div>

@@ -1,5 +1,6 @@
 import type { DesignSI, Result } from '~/solver';
-import type { UnitSystem } from '~/lib/format';
+import { lengthsInSystem, type UnitSystem } from '~/lib/format';
+import { fieldLabel, plainMessage } from '~/lib/design/labels';
 import { CoilDrawing } from '../drawing/CoilDrawing';
 import { fieldId } from './form/field-context';
 import { ResultsPanel } from './results/ResultsPanel';
@@ -43,7 +44,7 @@ export function ResultsAside({ live, pending, shown, system, onRetry }: Props) {
           <ul className="mt-1 list-disc pl-5">
             {issues.slice(0, 6).map((i) => (
               <li key={`${i.path}-${i.message}`}>
-                <a href={`#${fieldId(i.path)}`}>{i.path}</a>: {i.message}
+                <a href={`#${fieldId(i.path)}`}>{fieldLabel(i.path)}</a>: {lengthsInSystem(plainMessage(i.message), system)}
               </li>
             ))}
           </ul>

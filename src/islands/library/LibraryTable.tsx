@@ -1,3 +1,4 @@
+import { issueText } from '~/lib/design/labels';
 import { useCallback, useMemo, useRef, useState, type FormEvent } from 'react';
 import {
   createColumnHelper,
@@ -87,7 +88,7 @@ function LibraryTable({ pageSize = 20 }: Props) {
       () => importFile.mutateAsync(parsed),
       `Imported ${file.name}.`,
       (f) => {
-        const detail = f.issues.slice(0, 5).map((i) => `${i.path || 'file'}: ${i.message}`).join('; ');
+        const detail = f.issues.slice(0, 5).map((i) => issueText({ path: i.path || 'file', message: i.message })).join('; ');
         return detail ? `${f.message} ${detail}` : f.message;
       },
     );

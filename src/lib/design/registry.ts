@@ -314,7 +314,7 @@ export const DESIGN_FIELDS = [
     label: 'Cone angle above horizontal',
     help: 'conical only: rise of the cone above horizontal',
     hint: 'An angle, e.g. "30 deg"',
-    bounds: { min: 0, max: 90 * DEG, minInclusive: false, label: 'greater than 0 and less than 90 deg (a plain number is read in radians)' },
+    bounds: { min: 0, max: 90 * DEG, minInclusive: false, label: 'greater than 0 and less than 90 deg' },
     optional: true,
     default: '30 deg',
   },
@@ -483,6 +483,11 @@ export function findDesignField(path: string): FieldSpec | undefined {
 export function pathsOfKind<K extends FieldKind>(kind: K): Array<PathOfKind<K>> {
   return DESIGN_FIELDS.filter((f) => f.kind === kind).map((f) => f.path) as Array<PathOfKind<K>>;
 }
+
+/** The one rule for a number typed without its unit, said beside every quantity field and on the event sheet. */
+export const BARE_NUMBER_RULE = 'a number alone is refused: give its unit';
+/** How counts read grouped digits, said beside every count field. */
+export const GROUPING_RULE = '1,000 and 1 000 both read as 1000';
 
 /** The design's parts, in the order a builder works through a coil, with their headings. */
 export const DESIGN_PARTS = [

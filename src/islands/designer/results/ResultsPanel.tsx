@@ -1,6 +1,7 @@
 import { memo } from 'react';
 import type { Result } from '~/solver';
-import { formatFixed, formatPercent, formatQuantity as q, MISSING, type UnitSystem } from '~/lib/format';
+import { formatFixed, formatPercent, formatQuantity as q, lengthsInSystem, MISSING, type UnitSystem } from '~/lib/format';
+import { fieldLabel } from '~/lib/design/labels';
 import { SafetyNote } from '~/components/SafetyNote';
 import { FigureRow, Group } from './Row';
 import { TapCallout } from './TapCallout';
@@ -169,7 +170,7 @@ export const ResultsPanel = memo(function ResultsPanel({ result: r, system, stal
           <ul className="list-disc space-y-1 pl-5 text-sm">
             {r.warnings.map((w) => (
               <li key={`${w.code}-${w.path}-${w.message}`}>
-                <a href={`#${anchorFor(w.path)}`}>{w.path || 'design'}</a>: {w.message}
+                <a href={`#${anchorFor(w.path)}`}>{fieldLabel(w.path)}</a>: {lengthsInSystem(w.message, system)}
               </li>
             ))}
           </ul>
