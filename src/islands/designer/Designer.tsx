@@ -5,6 +5,7 @@ import { withApi } from '~/lib/api/provider';
 import type { DesignInput } from '~/lib/design';
 import { formatQuantity, lengthInputText, type UnitSystem } from '~/lib/format';
 import type { DesignRole } from '~/lib/permissions';
+import type { Calibration } from '~/lib/buildsheet/calibration';
 import type { SolverWarning } from '~/solver';
 import type { Goal, GoalAnswer } from '../../workers/protocol';
 import { FieldFeedbackContext, fieldId, type FieldFeedback } from './form/field-context';
@@ -33,6 +34,8 @@ export type DesignerProps = {
   /** where a new design starts: an example, or null for a draft or a blank design */
   start?: { name: string; design: DesignInput } | null;
   signInHref?: string;
+  /** values adopted on the bench; the tap shown is calibrated by them */
+  calibration?: Calibration | null;
 };
 
 function getPath(o: unknown, path: string): unknown {
@@ -214,7 +217,7 @@ function DesignerInner(props: DesignerProps) {
               </form>
               <GoalPanel input={input} system={system} hasPrimary={values.primary.enabled} hasTank={values.tank.mode !== 'none'} readOnly={readOnly} apply={applyGoal} />
             </div>
-            <ResultsAside live={live} pending={pending} shown={shown} system={system} onRetry={retry} />
+            <ResultsAside live={live} pending={pending} shown={shown} system={system} onRetry={retry} calibration={props.calibration ?? null} />
           </div>
           {shown && <ChartsPanel design={shown.design} input={input} inputKey={inputKey} system={system} />}
         </div>

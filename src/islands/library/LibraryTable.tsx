@@ -110,7 +110,21 @@ function LibraryTable({ pageSize = 20 }: Props) {
         sortUndefined: 'last',
         cell: (c) => <span className="tabular-nums">{formatSi(c.getValue(), 'Hz', 3)}</span>,
       }),
-      column.accessor('tapTurns', { header: 'Tap', cell: (c) => <span className="tabular-nums">{formatTurns(c.getValue())}</span> }),
+      column.accessor((d) => d.calibratedTapTurns ?? d.tapTurns, {
+        id: 'tapTurns',
+        header: 'Tap',
+        cell: (c) => {
+          const d = c.row.original;
+          const calibrated = d.calibratedTapTurns ?? null;
+          return calibrated === null ? (
+            <span className="tabular-nums" data-tap="predicted">{formatTurns(d.tapTurns)}</span>
+          ) : (
+            <span className="tabular-nums">
+              <span data-tap="calibrated">{formatTurns(calibrated)}</span> <span className="text-xs text-ink-soft">measured; predicted {formatTurns(d.tapTurns)}</span>
+            </span>
+          );
+        },
+      }),
       column.accessor('updatedAt', { header: 'Updated', sortingFn: 'datetime', cell: (c) => formatDate(c.getValue(), true) }),
       column.accessor('role', {
         header: 'My role',

@@ -8,7 +8,14 @@ import type { createDesignBodySchema, DesignListItem, DesignRecord, ResultSummar
 import type { SessionUser } from '../session';
 import { ApiError } from '../http';
 import { authorize, type DesignRow } from './access';
-import { requireDesignField, resultSummary, solveStored } from './solve';
+import { requireDesignField, resultSummary, solvedRow, solveStored } from './solve';
+import { calibrationOf } from './measurements';
+import { readCalibration } from '../../lib/buildsheet/calibration';
+
+/** Whether a builder adopted any measured value on the bench for this design. */
+function hasCalibration(row: DesignRow): boolean {
+  return Object.keys(readCalibration(row.calibration)).length > 0;
+}
 import { deleteAttachmentsOf } from './attachments';
 
 /** My designs and those shared with me, most recently changed first. */
@@ -45,6 +52,7 @@ export async function listDesigns(u: SessionUser): Promise<DesignListItem[]> {
       updatedAt: row.updatedAt.toISOString(),
       loadedFrequency: summary?.loadedFrequency ?? null,
       tapTurns: summary?.tapTurns ?? null,
+      calibratedTapTurns: hasCalibration(row) ? (calibrationOf(solvedRow(row)).calibrated?.tapTurns ?? null) : null,
     };
   });
 }

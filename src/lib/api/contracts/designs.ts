@@ -34,6 +34,8 @@ export const designListItemSchema = z.object({
   updatedAt: timestampSchema,
   loadedFrequency: z.number().nullable(),
   tapTurns: z.number().nullable(),
+  /** the tap for the values adopted on the bench; null when none were adopted */
+  calibratedTapTurns: z.number().nullable().optional(),
 });
 
 export const designListResponseSchema = z.object({ designs: z.array(designListItemSchema) });
