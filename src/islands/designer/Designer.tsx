@@ -8,6 +8,9 @@ import type { DesignRole } from '~/lib/permissions';
 import type { Calibration } from '~/lib/buildsheet/calibration';
 import type { SolverWarning } from '~/solver';
 import type { Goal, GoalAnswer } from '../../workers/protocol';
+import { proposeTank, type TankForm } from '~/lib/design/tank-goal';
+import { readSimpleQuantity } from '~/lib/format';
+import type { GoalApplied } from './GoalPanel';
 import { FieldFeedbackContext, fieldId, type FieldFeedback } from './form/field-context';
 import { SecondaryPart, ToploadPart, PrimaryPart, TankPart, SupplyPart, TuningPart } from './form/parts';
 import { designResolver } from './form/resolver';
@@ -44,8 +47,20 @@ function getPath(o: unknown, path: string): unknown {
 
 const keyOf = (v: FormValues) => JSON.stringify([v.name.trim(), toDesignInput(v)]);
 
-function capacitanceText(c: number): string {
-  return formatQuantity(c, 'capacitance', { digits: 4 }).replace('µ', 'u');
+type GoalPath = 'secondary.turns' | 'secondary.elevation' | 'tuning.targetCoupling' | 'tank.mode' | 'tank.capacitance' | 'tank.series' | 'tank.parallel';
+
+/** The tank as the goal helper sees it: its form (none, one capacitor, a bank) and the bank's units. */
+function tankForm(t: FormValues['tank']): TankForm {
+  if (t.mode === 'single') return { mode: 'single', capacitance: t.capacitance };
+  if (t.mode === 'none') return { mode: 'none' };
+  const unit = readSimpleQuantity(t.unitCapacitance);
+  const voltage = readSimpleQuantity(t.unitVoltage);
+  const series = Number(t.series);
+  const parallel = Number(t.parallel);
+  if (!unit || unit.unit.kind !== 'capacitance' || !Number.isInteger(series) || !Number.isInteger(parallel) || series < 1 || parallel < 1) {
+    return { mode: 'bank', unitCapacitance: NaN, unitCapacitanceText: t.unitCapacitance, unitVoltage: voltage?.value ?? NaN, series: 1, parallel: 1 };
+  }
+  return { mode: 'bank', unitCapacitance: unit.value, unitCapacitanceText: t.unitCapacitance.trim(), unitVoltage: voltage?.value ?? NaN, series, parallel };
 }
 
 function startValues(props: DesignerProps): FormValues {
@@ -144,17 +159,30 @@ function DesignerInner(props: DesignerProps) {
     [system, reset, getValues, convertAside, choose],
   );
 
-  function applyGoal(a: GoalAnswer, goal: Goal) {
+  /** Writes a goal's answer into the form and says exactly what changed, with a way to put it back. */
+  function applyGoal(a: GoalAnswer, goal: Goal): GoalApplied {
     const opts = { shouldDirty: true, shouldValidate: formState.isSubmitted };
-    if (a.kind === 'frequency') setValue('secondary.turns', String(Math.max(1, Math.round(a.turns))), opts);
+    const writes: Array<[GoalPath, string]> = [];
+    let message = '';
+    if (a.kind === 'frequency') {
+      const turns = String(Math.max(1, Math.round(a.turns)));
+      writes.push(['secondary.turns', turns]);
+      message = `Secondary turns ${getValues('secondary.turns')} → ${turns} (winding ${formatQuantity(a.windingLength, 'length', { system })}).`;
+    }
     if (a.kind === 'tap') {
-      setValue('tank.mode', 'single', opts);
-      setValue('tank.capacitance', capacitanceText(a.capacitance), opts);
+      const proposal = proposeTank(a.capacitance, tankForm(getValues('tank')));
+      if (!proposal.ok) return { ok: false, message: proposal.message };
+      for (const c of proposal.changes) writes.push([c.path, c.path === 'tank.mode' ? 'single' : c.to]);
+      message = proposal.message;
     }
     if (a.kind === 'coupling' && goal.kind === 'coupling') {
-      setValue('secondary.elevation', lengthInputText(a.elevation, system, 4), opts);
-      setValue('tuning.targetCoupling', String(goal.k), opts);
+      const elevation = lengthInputText(a.elevation, system, 4);
+      writes.push(['secondary.elevation', elevation], ['tuning.targetCoupling', String(goal.k)]);
+      message = `Winding bottom above primary plane ${getValues('secondary.elevation') || '0'} → ${elevation}; Target coupling k set to ${goal.k}.`;
     }
+    const before = writes.map(([path]) => [path, getValues(path)] as [GoalPath, string]);
+    for (const [path, value] of writes) setValue(path, value as never, opts);
+    return { ok: true, message, undo: () => before.forEach(([path, value]) => setValue(path, value as never, opts)) };
   }
 
   function bringBack() {
