@@ -1,3 +1,4 @@
+import { LocalDate } from '~/components/LocalDate';
 import { issueText } from '~/lib/design/labels';
 import { useCallback, useMemo, useRef, useState, type FormEvent } from 'react';
 import {
@@ -13,7 +14,7 @@ import {
 } from '@tanstack/react-table';
 import { FormMessage } from '~/components/ui/FormMessage';
 import { SortableTableHead } from '~/components/ui/SortableTableHead';
-import { formatDate, formatSi, formatTurns } from '~/lib/format';
+import { formatSi, formatTurns } from '~/lib/format';
 import { checkDesignName } from '~/lib/design/name';
 import { Dialog } from './Dialog';
 import { ApiFailure, failureMessage } from '~/lib/api/client';
@@ -125,7 +126,7 @@ function LibraryTable({ pageSize = 20 }: Props) {
           );
         },
       }),
-      column.accessor('updatedAt', { header: 'Updated', sortingFn: 'datetime', cell: (c) => formatDate(c.getValue(), true) }),
+      column.accessor('updatedAt', { header: 'Updated', sortingFn: 'datetime', cell: (c) => <LocalDate iso={c.getValue()} withTime /> }),
       column.accessor('role', {
         header: 'My role',
         filterFn: 'equals',
