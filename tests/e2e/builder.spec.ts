@@ -175,6 +175,8 @@ test.describe('results', () => {
 });
 
 test.describe('no console errors', () => {
+  // a reader far from the server's locale and time zone: any text formatted differently on the two sides shows up
+  test.use({ locale: 'de-DE', timezoneId: 'Pacific/Auckland' });
   test('the main pages load with no console error, hydration errors included', async ({ page }) => {
     const errors: string[] = [];
     page.on('console', (m) => {
@@ -216,9 +218,68 @@ test.describe('goal helper for the tank', () => {
     await page.getByLabel('Tank capacitance').fill('10 nF');
     await upToDate(page);
     const before = await page.getByLabel('Tank capacitance').inputValue();
-    await page.getByLabel('Tap at (turns from the inner end)').fill('0.1');
+    await page.getByLabel('Tap at (turns from the inner end)').fill('0.03');
     await page.getByRole('button', { name: 'Fill in the tank' }).click();
     await expect(page.locator('[data-goal-status="tap"]')).toContainText(/outside what a tank can be|No tank capacitance/);
     await expect(page.getByLabel('Tank capacitance')).toHaveValue(before);
+  });
+});
+
+test.describe('claims', () => {
+  test('the home page says only what the validation page has: published sources beside predictions, not measured coils', async ({ page }) => {
+    await page.goto('/');
+    const claim = page.locator('p', { hasText: 'validation page' });
+    await expect(claim).not.toContainText('compares predictions with coils that were built and measured');
+    await expect(claim).toContainText('not coils we built and measured');
+    await page.goto('/validation');
+    await expect(page.getByText(/Medhurst/).first()).toBeVisible();
+  });
+});
+
+test.describe('sweeps and charts', () => {
+  test('a sweep of the primary inner diameter through the secondary marks those points not buildable, with the form\'s reason', async ({ page }) => {
+    await openDesigner(page);
+    await page.getByLabel('Input to vary').selectOption('primary.innerDiameter');
+    await page.getByLabel('From', { exact: true }).fill('100 mm');
+    await page.getByLabel('To', { exact: true }).fill('300 mm');
+    await page.getByLabel('Number of points').fill('21');
+    await page.getByRole('button', { name: 'Run sweep' }).click();
+    const note = page.getByTestId('sweep-unbuildable');
+    await expect(note).toContainText('not buildable');
+    await expect(note).toContainText('would run through the secondary winding');
+    await expect(page.getByTestId('sweep-chart').getByText('not buildable').first()).toBeVisible();
+  });
+
+  test('a sweep from a negative length is refused naming the field, and the old chart goes', async ({ page }) => {
+    await openDesigner(page);
+    await page.getByLabel('Input to vary').selectOption('primary.innerDiameter');
+    await page.getByLabel('From', { exact: true }).fill('200 mm');
+    await page.getByLabel('To', { exact: true }).fill('300 mm');
+    await page.getByRole('button', { name: 'Run sweep' }).click();
+    await expect(page.getByTestId('sweep-chart')).toBeVisible();
+    await page.getByLabel('From', { exact: true }).fill('-100 mm');
+    await page.getByRole('button', { name: 'Run sweep' }).click();
+    await expect(page.getByRole('alert').filter({ hasText: 'Innermost turn diameter' })).toContainText('must be between 5 mm and 10 m');
+    await expect(page.getByTestId('sweep-chart')).toHaveCount(0);
+  });
+
+  test('charts have accessible names and data tables, legends outside the plot, and instructions that name line styles', async ({ page }) => {
+    await openDesigner(page);
+    await page.getByLabel('Input to vary').selectOption('secondary.turns');
+    await page.getByRole('button', { name: 'Run sweep' }).click();
+    await expect(page.getByTestId('sweep-chart')).toBeVisible();
+    const apps = page.locator('[role="application"]');
+    for (const el of await apps.all()) expect(await el.getAttribute('aria-label')).toBeTruthy();
+    const figures = page.locator('figure[role="group"]');
+    expect(await figures.count()).toBeGreaterThan(0);
+    for (const f of await figures.all()) {
+      expect(await f.getAttribute('aria-label')).toBeTruthy();
+      await expect(f.locator('details summary')).toContainText('Data table');
+    }
+    const tuning = page.getByTestId('tuning-chart');
+    if ((await tuning.count()) > 0) {
+      await expect(tuning).not.toContainText(/blue|copper curve|red/i);
+      await expect(tuning).toContainText('solid');
+    }
   });
 });
