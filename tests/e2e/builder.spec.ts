@@ -239,6 +239,9 @@ test.describe('claims', () => {
 test.describe('sweeps and charts', () => {
   test('a sweep of the primary inner diameter through the secondary marks those points not buildable, with the form\'s reason', async ({ page }) => {
     await openDesigner(page);
+    // the winding starts on the primary plane, so a primary narrower than the form runs through it
+    await page.getByLabel('Winding bottom above primary plane').fill('0 in');
+    await upToDate(page);
     await page.getByLabel('Input to vary').selectOption('primary.innerDiameter');
     await page.getByLabel('From', { exact: true }).fill('100 mm');
     await page.getByLabel('To', { exact: true }).fill('300 mm');
@@ -281,5 +284,35 @@ test.describe('sweeps and charts', () => {
       await expect(tuning).not.toContainText(/blue|copper curve|red/i);
       await expect(tuning).toContainText('solid');
     }
+  });
+});
+
+test.describe('sheets and consistency', () => {
+  test('the build sheet has a topload section, the primary with its diameters, gap and elevation, and the bleeder voltage checked', async ({ page }) => {
+    await signUp(page.request, 'sheet');
+    const made = await createDesign(page.request, 'Harbour Lane sheet coil');
+    await page.goto(`/designs/${made.id}/build`);
+    await expect(page.locator('[data-section="topload"]')).toContainText('Overall diameter');
+    const primary = page.locator('[data-section="primary"]');
+    for (const label of ['Innermost turn diameter', 'Gap between turns', 'Outside diameter', 'Innermost turn above the primary plane']) await expect(primary).toContainText(label);
+    await expect(page.locator('[data-section="tank"]')).toContainText('Bleeder voltage check');
+    await expect(page.locator('[data-section="supply"]')).not.toContainText('on a 9 kV transformer.');
+  });
+
+  test('the trail ends on the page itself, tabs and headings use one word, and the drawing gives the table\'s primary diameter', async ({ page }) => {
+    await signUp(page.request, 'trail');
+    const made = await createDesign(page.request, 'Harbour Lane trail coil');
+    await page.goto(`/designs/${made.id}/build`);
+    await expect(page.getByTestId('trail').locator('[aria-current="page"]')).toHaveText('Build sheet');
+    await page.goto(`/designs/${made.id}/bench`);
+    await expect(page.getByTestId('trail').locator('[aria-current="page"]')).toHaveText('Bench log');
+    await page.goto(`/designs/${made.id}/history`);
+    const tab = page.getByRole('navigation', { name: 'This design' }).locator('[aria-current="page"]');
+    await expect(page.getByRole('heading', { level: 1 })).toHaveText((await tab.textContent())!.trim());
+    await expect(page).toHaveTitle(/^Revisions/);
+    await page.goto(`/designs/${made.id}`);
+    await upToDate(page);
+    const table = (await page.locator('[data-result="primary.outerDiameter"]').textContent())!.trim();
+    await expect(page.locator('svg').getByText(`primary outside ⌀ ${table}`)).toHaveCount(1);
   });
 });
