@@ -142,7 +142,7 @@ describe('review summary', () => {
     expect(text).toMatch(/\| Decides the build \| Primary tap \(turns from the inner end\) \| [\d.]+ turns \|/);
     expect(text).toMatch(/\| What to buy \| Secondary wire length \| [\d.]+ (m|ft) \|/);
     expect(text).toMatch(/\| Input: Secondary \| Form outer diameter \| 4\.5 in \|/);
-    expect(text).toMatch(/\|  \| Secondary turns \| 1000 \|/);
+    expect(text).toMatch(/\| {2}\| Secondary turns \| 1000 \|/);
     // no capital-letter section headings over aligned columns
     expect(text).not.toMatch(/^[A-Z ()]{6,}$/m);
     expect(text).toMatch(/can kill/);
@@ -156,7 +156,7 @@ describe('review summary', () => {
     expect(r.headers.get('content-type')).toMatch(/^text\/markdown/);
     const md = await r.text();
     expect(md.split('\n')[0]).toMatch(new RegExp(`^\\*\\*${NAME}`));
-    expect(md).toMatch(/\|  \| Secondary turns \| 1000 \|/);
+    expect(md).toMatch(/\| {2}\| Secondary turns \| 1000 \|/);
     expect(md).toMatch(/\| Loaded resonant frequency \(with topload\) \| [\d.]+ kHz \|/);
     const bad = await owner.c.get(`/api/v1/designs/${id}/summary?format=pdf`);
     expect(bad.status).toBe(400);

@@ -1,4 +1,5 @@
 import * as fmt from './format';
+import { designField } from '../design/registry';
 import { METRES_PER_INCH } from '../format/length';
 import { BANK_NOTES, COATING_NOTES, SAFETY_CHECKLIST, SOLID_STATE_NOTES, transformerProtectionNotes, WINDING_NOTES, type SheetNote } from './notes';
 import type { BuildSheet } from './sheet';
@@ -102,11 +103,11 @@ export function sheetSections(sheet: BuildSheet): SheetSection[] {
   if (p) {
     const rows: SheetRow[] = [
       { label: 'Shape', value: `${p.shape}, ${fmt.plain(p.turns, 4)} turns of ${fmt.lengthShort(p.conductorDiameter)} conductor` },
-      { label: 'Innermost turn diameter', value: fmt.lengthShort(p.innerDiameter), note: 'centre line of the conductor' },
+      { label: designField('primary.innerDiameter').label, value: fmt.lengthShort(p.innerDiameter), note: 'centre line of the conductor' },
       { label: 'Gap between turns', value: fmt.lengthShort(p.spacing), note: 'between conductor surfaces' },
       { label: 'Outside diameter', value: fmt.lengthShort(p.outerDiameter), note: 'over the conductor of the outermost turn' },
       { label: 'Innermost turn above the primary plane', value: fmt.lengthShort(p.elevation) },
-      ...(p.angle !== null ? [{ label: 'Cone angle above horizontal', value: `${fmt.plain((p.angle * 180) / Math.PI, 3)}°` }] : []),
+      ...(p.angle !== null ? [{ label: designField('primary.angle').label, value: `${fmt.plain((p.angle * 180) / Math.PI, 3)}°` }] : []),
       { label: 'Conductor length (all turns)', value: fmt.lengthLong(p.conductorLength) },
       { label: 'Conductor to buy', value: fmt.lengthLong(p.conductorToBuy), note: `with ${fmt.percent(o.margin, 0)} extra; add the leads to the tank and gap` },
     ];

@@ -12,7 +12,7 @@ const OTHER_NAMES: Record<string, string> = {
 };
 
 /**
- * The name a person reads for a path of the design ("secondary.windingLength" → "Winding length"): the field's
+ * The name a person reads for a path of the design (a field path gives the label its input shows): the field's
  * label on screen, its part's heading for a part, and never the raw path. An API path may start with
  * "design." (a request body); array indexes are left out.
  */

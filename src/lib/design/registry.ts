@@ -314,7 +314,7 @@ export const DESIGN_FIELDS = [
     label: 'Cone angle above horizontal',
     help: 'conical only: rise of the cone above horizontal',
     hint: 'An angle, e.g. "30 deg"',
-    bounds: { min: 0, max: 90 * DEG, minInclusive: false, label: 'greater than 0 and less than 90 deg' },
+    bounds: { min: 0, max: 90 * DEG, minInclusive: false, label: 'greater than 0 and less than 90 deg (a plain number is read in radians)' },
     optional: true,
     default: '30 deg',
   },
