@@ -1,3 +1,4 @@
+import { plainMessage } from '../lib/design/labels';
 import type { z } from 'zod';
 import { apiErrors } from '../lib/api-errors';
 import type { ApiErrorCode, ApiIssue } from '../lib/api/contracts/errors';
@@ -70,7 +71,7 @@ export async function readOptionalJson(request: Request, limit?: number): Promis
 
 /** zod's issues in the contract's shape: a dotted path and a message. */
 export function issuesOf(error: z.ZodError): ApiIssue[] {
-  return error.issues.map((i) => ({ path: i.path.join('.'), message: i.message }));
+  return error.issues.map((i) => ({ path: i.path.join('.'), message: plainMessage(i.message) }));
 }
 
 /** Checks a value against a contract schema; a mismatch is a 400 naming every field. */

@@ -32,6 +32,10 @@ export interface SweepData {
   path: string;
   rows: Array<Record<string, number | null>>;
   series: SweepSeriesName[];
+  /** indexes of the rows whose design the form's own checks refuse (not buildable) */
+  invalid?: number[];
+  /** the first refused point's reason, naming the field by its label */
+  invalidReason?: string | null;
 }
 
 export interface TuningCurve {

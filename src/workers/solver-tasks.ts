@@ -1,4 +1,6 @@
 import { parseDesign } from '../lib/design';
+import { fieldLabel, issueText } from '../lib/design/labels';
+import { checkDesign } from '../solver/system/checks';
 import {
   energyExchange,
   elevationForCoupling,
@@ -119,7 +121,20 @@ export function sweepData(d: DesignSI, req: SweepRequest): SweepData {
     for (const name of req.series) row[name] = s.series[name]?.[i] ?? null;
     return row;
   });
-  return { path: req.path, rows, series: req.series };
+  const firstBad = s.invalid[0];
+  let invalidReason: string | null = null;
+  if (firstBad !== undefined) {
+    const issue = checkDesign(withValue(d, req.path, s.values[firstBad]))[0];
+    invalidReason = issue ? issueText(issue) : `${fieldLabel(req.path)}: the value is out of range at this point`;
+  }
+  return { path: req.path, rows, series: req.series, invalid: s.invalid, invalidReason };
+}
+
+/** The design with one input set to a value, as the sweep sets it. */
+function withValue(d: DesignSI, path: string, value: number): DesignSI {
+  const keys = path.split('.');
+  const put = (o: unknown, i: number): unknown => (i === keys.length ? value : { ...(o as Record<string, unknown>), [keys[i]]: put((o as Record<string, unknown>)[keys[i]], i + 1) });
+  return put(d, 0) as DesignSI;
 }
 
 export function goalAnswer(d: DesignSI, goal: Goal): GoalAnswer | null {

@@ -134,13 +134,17 @@ describe('review summary', () => {
     expect(r.status).toBe(200);
     expect(r.headers.get('content-type')).toMatch(/^text\/plain/);
     const text = await r.text();
-    expect(text).toContain(NAME);
-    expect(text).toMatch(/Form outer diameter\s+4\.5 in/);
-    expect(text).toMatch(/Secondary turns\s+1000/);
-    expect(text).toMatch(/Loaded resonant frequency \(with topload\)\s+[\d.]+ kHz/);
-    expect(text).toMatch(/Coupling coefficient k \(all primary turns\)\s+0\.\d+/);
-    expect(text).toMatch(/Primary tap \(turns from the inner end\)\s+[\d.]+ turns/);
-    expect(text).toMatch(/Tank energy at the supply peak\s+[\d.]+ J/);
+    const lines = text.split('\n');
+    // one header line with the key figures, then one table grouped as the results panel is
+    expect(lines[0]).toContain(NAME);
+    expect(lines[0]).toMatch(/tap [\d.]+ turns · loaded resonant frequency [\d.]+ kHz · coupling k 0\.\d+ · tank energy at the supply peak [\d.]+ J/);
+    expect(lines[2]).toBe('| Group | Figure | Value |');
+    expect(text).toMatch(/\| Decides the build \| Primary tap \(turns from the inner end\) \| [\d.]+ turns \|/);
+    expect(text).toMatch(/\| What to buy \| Secondary wire length \| [\d.]+ (m|ft) \|/);
+    expect(text).toMatch(/\| Input: Secondary \| Form outer diameter \| 4\.5 in \|/);
+    expect(text).toMatch(/\| {2}\| Secondary turns \| 1000 \|/);
+    // no capital-letter section headings over aligned columns
+    expect(text).not.toMatch(/^[A-Z ()]{6,}$/m);
     expect(text).toMatch(/can kill/);
     expect(text).not.toMatch(/NaN|Infinity|undefined|\[object/);
   });
@@ -151,8 +155,8 @@ describe('review summary', () => {
     const r = await owner.c.get(`/api/v1/designs/${id}/summary?format=markdown`);
     expect(r.headers.get('content-type')).toMatch(/^text\/markdown/);
     const md = await r.text();
-    expect(md).toContain(`## ${NAME}`);
-    expect(md).toMatch(/\| Secondary turns \| 1000 \|/);
+    expect(md.split('\n')[0]).toMatch(new RegExp(`^\\*\\*${NAME}`));
+    expect(md).toMatch(/\| {2}\| Secondary turns \| 1000 \|/);
     expect(md).toMatch(/\| Loaded resonant frequency \(with topload\) \| [\d.]+ kHz \|/);
     const bad = await owner.c.get(`/api/v1/designs/${id}/summary?format=pdf`);
     expect(bad.status).toBe(400);

@@ -12,7 +12,7 @@ test('the bench page records a measurement with its error, uploads a photo to th
   const { id, result } = (await created.json()) as { id: string; result: { system: { resonantFrequency: number }; secondary: { wireLength: number } } };
 
   await page.goto(`/designs/${id}/bench`);
-  await expect(page.getByRole('heading', { name: 'Bench: Workbench coil' })).toBeVisible();
+  await expect(page.getByRole('heading', { name: 'Bench log: Workbench coil' })).toBeVisible();
 
   // 5 % below the prediction, typed in kHz
   const measuredKHz = ((result.system.resonantFrequency * 0.95) / 1e3).toFixed(3);

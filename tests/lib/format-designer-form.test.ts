@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { exampleDesigns, parseDesign, type DesignSI } from '~/lib/design';
 import { convertLengths, fromDesignInput, toDesignInput, emptyValues } from '~/islands/designer/form/values';
 import { runRequest } from '~/workers/solver-tasks';
+import { BUILDER_STEP } from '~/lib/format';
 
 function flatten(o: unknown, prefix = '', out: Record<string, unknown> = {}): Record<string, unknown> {
   if (o && typeof o === 'object') for (const [k, v] of Object.entries(o)) flatten(v, prefix ? `${prefix}.${k}` : k, out);
@@ -9,12 +10,15 @@ function flatten(o: unknown, prefix = '', out: Record<string, unknown> = {}): Re
   return out;
 }
 
+/** Lengths shown in the other system are rounded to the precision entered, never coarser than a builder's step (1/16 in, 0.1 mm). */
+const HALF_STEP = BUILDER_STEP.imperial / 2;
+
 function expectSameDesign(got: DesignSI, expected: DesignSI, label: string) {
   const g = flatten(got);
   const e = flatten(expected);
   expect(Object.keys(g).sort(), label).toEqual(Object.keys(e).sort());
   for (const [k, v] of Object.entries(e)) {
-    if (typeof v === 'number') expect(Math.abs((g[k] as number) - v), `${label}: ${k} got ${g[k]}, expected ${v}`).toBeLessThanOrEqual(1e-5 * Math.max(1, Math.abs(v)));
+    if (typeof v === 'number') expect(Math.abs((g[k] as number) - v), `${label}: ${k} got ${g[k]}, expected ${v}`).toBeLessThanOrEqual(Math.max(1e-5 * Math.max(1, Math.abs(v)), HALF_STEP));
     else expect(g[k], `${label}: ${k}`).toEqual(v);
   }
 }

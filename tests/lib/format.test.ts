@@ -100,8 +100,17 @@ describe('convertLengthText', () => {
 
   it('convertLengthText gives back exactly the text typed when switched there and back', () => {
     const there = convertLengthText('0.6 m', 'imperial');
-    expect(there).toBe('23.622 in');
+    expect(there).toBe('23.62 in');
     expect(convertLengthText(there, 'metric')).toBe('0.6 m');
+  });
+
+  it('convertLengthText rounds to the precision entered or a builder\'s step, never to six figures', () => {
+    expect(convertLengthText('100 mm', 'imperial')).toBe('3.94 in');
+    expect(convertLengthText('450 mm', 'imperial')).toBe('17.72 in');
+    expect(convertLengthText('114.3 mm', 'imperial')).toBe('4.5 in');
+    expect(convertLengthText('4.5 in', 'metric')).toBe('114.3 mm');
+    expect(convertLengthText('6.6 in', 'metric')).toBe('167.64 mm');
+    expect(convertLengthText('0.0201 in', 'metric')).toBe('0.5105 mm');
   });
 
   it('convertLengthText leaves text already in the target system as typed', () => {

@@ -33,7 +33,7 @@ describe('parseQuantity (fast path for plain forms, mathjs for the rest)', () =>
   });
 
   it('parseQuantity keeps the messages for numbers without units, empty text and wrong dimensions', () => {
-    expect(parseQuantity('12', 'length')).toEqual({ ok: false, message: 'expected a length such as "4 in" or "0.1 m", got a number without a unit (write "12 m" or give a plain number in m)' });
+    expect(parseQuantity('12', 'length')).toEqual({ ok: false, message: 'expected a length such as "4 in" or "0.1 m", got a number without a unit; a bare number is read in no unit, so write it with one, e.g. "12 mm"' });
     expect(parseQuantity('  ', 'voltage')).toEqual({ ok: false, message: 'expected a voltage such as "12 kV" or "340 V", got an empty text' });
     expect(parseQuantity('3 kg', 'length')).toEqual({ ok: false, message: 'expected a length such as "4 in" or "0.1 m", got a mass' });
     expect(parseQuantity('20 nF', 'length')).toEqual({ ok: false, message: 'expected a length such as "4 in" or "0.1 m", got a capacitance' });

@@ -101,7 +101,7 @@ describe('GET /designs/:id/event', () => {
     expect(r.status).toBe(400);
     const html = await r.text();
     expect(html).toContain('data-testid="spark-error"');
-    expect(html).toMatch(/spark: give the longest arc as a length/);
+    expect(html).toMatch(/Longest arc: give the longest arc as a length/);
     expect(html).not.toMatch(/NaN|Infinity/);
   });
 });

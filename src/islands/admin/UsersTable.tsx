@@ -1,3 +1,4 @@
+import { LocalDate } from '~/components/LocalDate';
 import { useCallback, useMemo, useState, type SubmitEvent } from 'react';
 import {
   createColumnHelper,
@@ -9,7 +10,6 @@ import {
 } from '@tanstack/react-table';
 import { authErrorMessage, errorMessages } from '~/lib/errors';
 import { FormMessage } from '~/components/ui/FormMessage';
-import { formatDate } from '~/lib/format';
 import { SortableTableHead } from '~/components/ui/SortableTableHead';
 import { withApi } from '~/lib/api/provider';
 import { AuthFailure, useSetUserDisabled, useSetUserRole, useUsers, type SiteRoleName, type UserRow } from '~/lib/api/queries/admin';
@@ -108,7 +108,7 @@ function UsersTable({ currentUserId, pageSize = 25 }: Props) {
             <span className="text-sound">Active</span>
           ),
       }),
-      column.accessor('createdAt', { header: 'Joined', cell: (c) => formatDate(c.getValue()) }),
+      column.accessor('createdAt', { header: 'Joined', cell: (c) => <LocalDate iso={c.getValue()} /> }),
       column.display({
         id: 'actions',
         header: () => <span className="sr-only">Actions</span>,

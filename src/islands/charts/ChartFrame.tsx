@@ -1,12 +1,15 @@
-import type { ReactNode } from 'react';
-import { CartesianGrid, Label, Legend, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import { useId, type ReactNode } from 'react';
+import { CartesianGrid, Label, Line, LineChart, ReferenceArea, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { formatSignificant } from '~/lib/format';
 
 export interface LineSpec {
   key: string;
   name: string;
   color: string;
+  /** drawn dashed; named "dashed" in the legend and in instructions, so nothing depends on colour */
   dashed?: boolean;
+  /** drawn dotted; named "dotted" */
+  dotted?: boolean;
 }
 
 export interface RefLine {
@@ -16,6 +19,13 @@ export interface RefLine {
   color?: string;
 }
 
+/** A stretch of the x axis to shade and name, e.g. points of a sweep that are not buildable. */
+export interface Band {
+  x1: number;
+  x2: number;
+  label: string;
+}
+
 type Props = {
   data: ReadonlyArray<Record<string, number | null>>;
   xKey: string;
@@ -23,35 +33,97 @@ type Props = {
   yLabel: string;
   lines: LineSpec[];
   refs?: RefLine[];
+  bands?: Band[];
   dots?: boolean;
   height?: number;
   yDomain?: [number | 'auto', number | 'auto'];
+  xDomain?: [number | 'dataMin', number | 'dataMax'];
   caption?: ReactNode;
   testId?: string;
+  /** the chart's accessible name; defaults to "<y> against <x>" */
+  title?: string;
 };
 
-const tick = (v: number) => formatSignificant(v, 3);
+/** How a line is drawn, in words: what the legend and every instruction use instead of its colour. */
+export function lineStyleName(l: LineSpec): string {
+  return l.dashed ? 'dashed' : l.dotted ? 'dotted' : 'solid';
+}
 
-/** A line chart with labelled axes (units in the labels), a tooltip and optional reference lines. */
-export function ChartFrame({ data, xKey, xLabel, yLabel, lines, refs = [], dots = false, height = 260, yDomain = ['auto', 'auto'], caption, testId }: Props) {
+const dashOf = (l: LineSpec) => (l.dashed ? '7 4' : l.dotted ? '2 3' : undefined);
+
+/**
+ * Tick labels with as many digits as the axis's span needs, so that ticks on a nearly flat series do not
+ * repeat ("1.000, 1.001, 1.002" rather than "1, 1, 1"), and plain figures otherwise.
+ */
+export function tickFormatterFor(values: readonly number[]): (v: number) => string {
+  const finite = values.filter((v) => Number.isFinite(v));
+  if (finite.length === 0) return (v) => formatSignificant(v, 3);
+  const span = Math.max(...finite) - Math.min(...finite);
+  const size = Math.max(...finite.map(Math.abs));
+  if (!(span > 0) || size === 0) return (v) => formatSignificant(v, 3);
+  const decimals = Math.max(0, Math.min(9, Math.ceil(-Math.log10(span / 5)) + 1));
+  const digits = Math.ceil(Math.log10(size / span)) + 2;
+  if (digits <= 3) return (v) => formatSignificant(v, 3);
+  return (v) => (Number.isFinite(v) ? Number(v.toFixed(decimals)).toString() : '');
+}
+
+/** A series that does not change gets a small band around it, so its axis shows one clear value. */
+function flatDomain(values: readonly number[]): [number, number] | null {
+  const finite = values.filter((v) => Number.isFinite(v));
+  if (finite.length === 0) return null;
+  const lo = Math.min(...finite);
+  const hi = Math.max(...finite);
+  if (hi - lo > 1e-9 * Math.max(Math.abs(hi), 1e-300)) return null;
+  const pad = Math.abs(hi) > 0 ? Math.abs(hi) * 0.1 : 1;
+  return [lo - pad, hi + pad];
+}
+
+/**
+ * A line chart with labelled axes (units in the labels), a tooltip, optional reference lines and shaded bands,
+ * a legend outside the plot that names each line's style, an accessible name, and the data as a table.
+ */
+export function ChartFrame({ data, xKey, xLabel, yLabel, lines, refs = [], bands = [], dots = false, height = 260, yDomain = ['auto', 'auto'], xDomain = ['dataMin', 'dataMax'], caption, testId, title }: Props) {
+  const name = title ?? `${yLabel} against ${xLabel}`;
+  const tableId = useId();
+  const yValues = data.flatMap((r) => lines.map((l) => r[l.key]).filter((v): v is number => typeof v === 'number'));
+  const xValues = data.map((r) => r[xKey]).filter((v): v is number => typeof v === 'number');
+  const flat = yDomain[0] === 'auto' && yDomain[1] === 'auto' ? flatDomain(yValues) : null;
+  const domain = flat ?? yDomain;
+  const yTick = tickFormatterFor(flat ?? yValues);
+  const xTick = tickFormatterFor(xValues);
+  const cell = (v: number | null | undefined) => (typeof v === 'number' && Number.isFinite(v) ? formatSignificant(v, 4) : '—');
   return (
-    <figure data-testid={testId} className="w-full">
+    <figure data-testid={testId} className="w-full" aria-label={name} role="group">
+      {lines.length > 1 && (
+        <ul className="mb-1 flex flex-wrap gap-x-4 gap-y-1 text-xs" aria-label="Legend">
+          {lines.map((l) => (
+            <li key={l.key} className="flex items-center gap-1.5">
+              <svg width="28" height="8" aria-hidden="true">
+                <line x1="0" y1="4" x2="28" y2="4" stroke={l.color} strokeWidth="2" strokeDasharray={dashOf(l)} />
+              </svg>
+              {l.name} ({lineStyleName(l)})
+            </li>
+          ))}
+        </ul>
+      )}
       <div style={{ width: '100%', height }}>
         <ResponsiveContainer width="100%" height="100%">
-          <LineChart data={data as Array<Record<string, number | null>>} margin={{ top: 12, right: 16, bottom: 28, left: 16 }}>
+          <LineChart data={data as Array<Record<string, number | null>>} margin={{ top: 12, right: 16, bottom: 28, left: 16 }} accessibilityLayer={false} role="img" aria-label={name}>
             <CartesianGrid stroke="var(--color-rule)" strokeDasharray="3 3" />
-            <XAxis dataKey={xKey} type="number" domain={['dataMin', 'dataMax']} tickFormatter={tick} stroke="var(--color-ink-soft)" tick={{ fill: 'var(--color-ink-soft)', fontSize: 12 }}>
+            <XAxis dataKey={xKey} type="number" domain={xDomain} allowDataOverflow={typeof xDomain[0] === 'number'} tickFormatter={xTick} stroke="var(--color-ink-soft)" tick={{ fill: 'var(--color-ink-soft)', fontSize: 12 }}>
               <Label value={xLabel} position="insideBottom" offset={-16} fill="var(--color-ink)" fontSize={13} />
             </XAxis>
-            <YAxis domain={yDomain} allowDataOverflow={yDomain[0] !== 'auto' && yDomain[1] !== 'auto'} tickFormatter={tick} stroke="var(--color-ink-soft)" tick={{ fill: 'var(--color-ink-soft)', fontSize: 12 }} width={64}>
+            <YAxis domain={domain} allowDataOverflow={domain[0] !== 'auto' && domain[1] !== 'auto'} tickFormatter={yTick} stroke="var(--color-ink-soft)" tick={{ fill: 'var(--color-ink-soft)', fontSize: 12 }} width={64}>
               <Label value={yLabel} angle={-90} position="insideLeft" style={{ textAnchor: 'middle' }} fill="var(--color-ink)" fontSize={13} offset={0} />
             </YAxis>
             <Tooltip
-              formatter={(v) => (typeof v === 'number' ? tick(v) : String(v))}
-              labelFormatter={(v) => `${xLabel}: ${typeof v === 'number' ? tick(v) : String(v)}`}
+              formatter={(v) => (typeof v === 'number' ? formatSignificant(v, 4) : String(v))}
+              labelFormatter={(v) => `${xLabel}: ${typeof v === 'number' ? formatSignificant(v, 4) : String(v)}`}
               contentStyle={{ background: 'var(--color-panel)', borderColor: 'var(--color-rule)', color: 'var(--color-ink)' }}
             />
-            {lines.length > 1 && <Legend verticalAlign="top" height={30} wrapperStyle={{ fontSize: 13 }} />}
+            {bands.map((b) => (
+              <ReferenceArea key={`${b.x1}-${b.x2}`} x1={b.x1} x2={b.x2} fill="var(--color-fault)" fillOpacity={0.12} stroke="var(--color-fault)" strokeDasharray="2 2" label={{ value: b.label, fill: 'var(--color-fault)', fontSize: 11, position: 'insideTop' }} ifOverflow="hidden" />
+            ))}
             {refs.map((r) => (
               <ReferenceLine
                 key={`${r.label}-${r.x ?? ''}-${r.y ?? ''}`}
@@ -70,7 +142,7 @@ export function ChartFrame({ data, xKey, xLabel, yLabel, lines, refs = [], dots 
                 type="monotone"
                 stroke={l.color}
                 strokeWidth={2}
-                strokeDasharray={l.dashed ? '6 4' : undefined}
+                strokeDasharray={dashOf(l)}
                 dot={dots ? { r: 2.5 } : false}
                 connectNulls={false}
                 isAnimationActive={false}
@@ -80,6 +152,40 @@ export function ChartFrame({ data, xKey, xLabel, yLabel, lines, refs = [], dots 
         </ResponsiveContainer>
       </div>
       {caption && <figcaption className="mt-1 text-xs text-ink-soft">{caption}</figcaption>}
+      <details className="mt-1 text-xs">
+        <summary className="cursor-pointer text-ink-soft">Data table: {name}</summary>
+        <div className="max-h-64 overflow-auto">
+          <table className="w-full tabular-nums" aria-labelledby={tableId}>
+            <caption id={tableId} className="sr-only">
+              {name}
+            </caption>
+            <thead>
+              <tr>
+                <th scope="col" className="text-left">
+                  {xLabel}
+                </th>
+                {lines.map((l) => (
+                  <th key={l.key} scope="col" className="text-right">
+                    {l.name}
+                  </th>
+                ))}
+              </tr>
+            </thead>
+            <tbody>
+              {data.map((r, i) => (
+                <tr key={i}>
+                  <td>{cell(r[xKey])}</td>
+                  {lines.map((l) => (
+                    <td key={l.key} className="text-right">
+                      {cell(r[l.key])}
+                    </td>
+                  ))}
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        </div>
+      </details>
     </figure>
   );
 }

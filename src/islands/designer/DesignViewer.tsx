@@ -1,8 +1,10 @@
+import { issueText } from '~/lib/design/labels';
 import { useEffect, useMemo, useState } from 'react';
 import type { DesignInput } from '~/lib/design';
 import type { DesignIssue, DesignSI, Result } from '~/solver';
 import { solverClient } from './solver-client';
 import type { UnitSystem } from '~/lib/format';
+import type { Calibration } from '~/lib/buildsheet/calibration';
 import { CoilDrawing } from '../drawing/CoilDrawing';
 import { ResultsPanel } from './results/ResultsPanel';
 import { ChartsPanel } from './ChartsPanel';
@@ -13,10 +15,12 @@ export type DesignViewerProps = {
   design: DesignInput;
   result: Result | null;
   unitSystem?: UnitSystem;
+  /** values adopted on the bench; the tap shown is calibrated by them */
+  calibration?: Calibration | null;
 };
 
 /** A saved design, read-only: drawing, results and charts, no inputs. For share links and build sheets. */
-export default function DesignViewer({ name, design, result, unitSystem = 'metric' }: DesignViewerProps) {
+export default function DesignViewer({ name, design, result, unitSystem = 'metric', calibration = null }: DesignViewerProps) {
   const [system, setSystem] = useState<UnitSystem>(unitSystem);
   const inputKey = useMemo(() => JSON.stringify(design), [design]);
   // the worker resolves the stored input into SI for the drawing and the charts
@@ -37,7 +41,7 @@ export default function DesignViewer({ name, design, result, unitSystem = 'metri
   if (!result || (parsed && !parsed.ok)) {
     return (
       <p className="cw-alert" role="status">
-        “{name}” can no longer be computed: {parsed && !parsed.ok ? parsed.issues.map((i) => `${i.path}: ${i.message}`).join('; ') : 'the solver gave no result'}.
+        “{name}” can no longer be computed: {parsed && !parsed.ok ? parsed.issues.map((i) => issueText(i)).join('; ') : 'the solver gave no result'}.
       </p>
     );
   }
@@ -62,7 +66,7 @@ export default function DesignViewer({ name, design, result, unitSystem = 'metri
           <h2 id="viewer-results" className="text-lg font-semibold">
             Results
           </h2>
-          <ResultsPanel result={result} system={system} />
+          <ResultsPanel result={result} system={system} calibration={calibration} design={parsed.design} />
         </section>
       </div>
       <ChartsPanel design={parsed.design} input={design} inputKey={inputKey} system={system}  />

@@ -1,11 +1,16 @@
-import { useCallback, useEffect, useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { primaryInnerDefault } from '~/lib/design/defaults';
 import { FormProvider, useForm, useWatch } from 'react-hook-form';
 import { withApi } from '~/lib/api/provider';
 import type { DesignInput } from '~/lib/design';
-import { formatQuantity, lengthInputText, type UnitSystem } from '~/lib/format';
+import { formatFixed, formatQuantity, lengthInputText, type UnitSystem } from '~/lib/format';
 import type { DesignRole } from '~/lib/permissions';
+import type { Calibration } from '~/lib/buildsheet/calibration';
 import type { SolverWarning } from '~/solver';
 import type { Goal, GoalAnswer } from '../../workers/protocol';
+import { proposeTank, type TankForm } from '~/lib/design/tank-goal';
+import { readSimpleQuantity } from '~/lib/format';
+import type { GoalApplied } from './GoalPanel';
 import { FieldFeedbackContext, fieldId, type FieldFeedback } from './form/field-context';
 import { SecondaryPart, ToploadPart, PrimaryPart, TankPart, SupplyPart, TuningPart } from './form/parts';
 import { designResolver } from './form/resolver';
@@ -32,6 +37,8 @@ export type DesignerProps = {
   /** where a new design starts: an example, or null for a draft or a blank design */
   start?: { name: string; design: DesignInput } | null;
   signInHref?: string;
+  /** values adopted on the bench; the tap shown is calibrated by them */
+  calibration?: Calibration | null;
 };
 
 function getPath(o: unknown, path: string): unknown {
@@ -40,8 +47,29 @@ function getPath(o: unknown, path: string): unknown {
 
 const keyOf = (v: FormValues) => JSON.stringify([v.name.trim(), toDesignInput(v)]);
 
-function capacitanceText(c: number): string {
-  return formatQuantity(c, 'capacitance', { digits: 4 }).replace('µ', 'u');
+type GoalPath =
+  | 'secondary.turns'
+  | 'secondary.elevation'
+  | 'tuning.targetCoupling'
+  | 'tank.mode'
+  | 'tank.capacitance'
+  | 'tank.series'
+  | 'tank.parallel'
+  | 'supply.onTime'
+  | 'supply.tuningRatio';
+
+/** The tank as the goal helper sees it: its form (none, one capacitor, a bank) and the bank's units. */
+function tankForm(t: FormValues['tank']): TankForm {
+  if (t.mode === 'single') return { mode: 'single', capacitance: t.capacitance };
+  if (t.mode === 'none') return { mode: 'none' };
+  const unit = readSimpleQuantity(t.unitCapacitance);
+  const voltage = readSimpleQuantity(t.unitVoltage);
+  const series = Number(t.series);
+  const parallel = Number(t.parallel);
+  if (!unit || unit.unit.kind !== 'capacitance' || !Number.isInteger(series) || !Number.isInteger(parallel) || series < 1 || parallel < 1) {
+    return { mode: 'bank', unitCapacitance: NaN, unitCapacitanceText: t.unitCapacitance, unitVoltage: voltage?.value ?? NaN, series: 1, parallel: 1 };
+  }
+  return { mode: 'bank', unitCapacitance: unit.value, unitCapacitanceText: t.unitCapacitance.trim(), unitVoltage: voltage?.value ?? NaN, series, parallel };
 }
 
 function startValues(props: DesignerProps): FormValues {
@@ -87,6 +115,22 @@ function DesignerInner(props: DesignerProps) {
     clearNewDraft: draft.clearNew,
   });
 
+  // the primary's innermost turn follows the form until the builder types one of their own
+  const untouchedInner = useRef<string | null>(initial.primary.enabled ? null : initial.primary.innerDiameter);
+  const formText = values.secondary.formDiameter;
+  const innerText = values.primary.innerDiameter;
+  useEffect(() => {
+    if (untouchedInner.current === null || innerText !== untouchedInner.current) {
+      untouchedInner.current = null;
+      return;
+    }
+    const next = primaryInnerDefault(formText, system);
+    if (next && next !== innerText) {
+      untouchedInner.current = next;
+      setValue('primary.innerDiameter', next);
+    }
+  }, [formText, innerText, system, setValue]);
+
   const { clearServerIssues } = save;
   useEffect(() => clearServerIssues(), [inputKey, clearServerIssues]);
 
@@ -113,7 +157,9 @@ function DesignerInner(props: DesignerProps) {
   const switchUnits = useCallback(
     (next: UnitSystem) => {
       if (next === system) return;
-      reset(convertLengths(getValues(), next));
+      const converted = convertLengths(getValues(), next);
+      if (untouchedInner.current !== null) untouchedInner.current = converted.primary.innerDiameter;
+      reset(converted);
       setSaved((s) => (s ? convertLengths(s, next) : s));
       setBaseline((s) => convertLengths(s, next));
       convertAside(next);
@@ -122,28 +168,46 @@ function DesignerInner(props: DesignerProps) {
     [system, reset, getValues, convertAside, choose],
   );
 
-  function applyGoal(a: GoalAnswer, goal: Goal) {
+  /** Writes a goal's answer into the form and says exactly what changed, with a way to put it back. */
+  function applyGoal(a: GoalAnswer, goal: Goal): GoalApplied {
     const opts = { shouldDirty: true, shouldValidate: formState.isSubmitted };
-    if (a.kind === 'frequency') setValue('secondary.turns', String(Math.max(1, Math.round(a.turns))), opts);
+    const writes: Array<[GoalPath, string]> = [];
+    let message = '';
+    if (a.kind === 'frequency') {
+      const turns = String(Math.max(1, Math.round(a.turns)));
+      writes.push(['secondary.turns', turns]);
+      message = `Secondary turns ${getValues('secondary.turns')} → ${turns} (winding ${formatQuantity(a.windingLength, 'length', { system })}).`;
+    }
     if (a.kind === 'tap') {
-      setValue('tank.mode', 'single', opts);
-      setValue('tank.capacitance', capacitanceText(a.capacitance), opts);
+      const proposal = proposeTank(a.capacitance, tankForm(getValues('tank')));
+      if (!proposal.ok) return { ok: false, message: proposal.message };
+      for (const c of proposal.changes) writes.push([c.path, c.path === 'tank.mode' ? 'single' : c.to]);
+      message = proposal.message;
     }
-    if (a.kind === 'onTime') setValue('supply.onTime', `${Number((a.onTime * 1e6).toPrecision(3))} us`, opts);
+    if (a.kind === 'onTime') {
+      const onTime = `${Number((a.onTime * 1e6).toPrecision(3))} us`;
+      writes.push(['supply.onTime', onTime]);
+      message = `On-time ${getValues('supply.onTime') || '(default)'} → ${onTime}.`;
+    }
     if (a.kind === 'tankForCurrent') {
-      const bank = shown?.design.tank;
-      if (values.tank.mode === 'bank' && bank && bank.kind === 'bank') {
-        setValue('tank.parallel', String(Math.max(1, Math.round((a.capacitance * bank.series) / bank.unitCapacitance))), opts);
-      } else {
-        setValue('tank.mode', 'single', opts);
-        setValue('tank.capacitance', capacitanceText(a.capacitance), opts);
-      }
+      // the tank keeps its form: a bank gets strings and units that give the value, or the helper says it cannot
+      const proposal = proposeTank(a.capacitance, tankForm(getValues('tank')));
+      if (!proposal.ok) return { ok: false, message: proposal.message };
+      for (const c of proposal.changes) writes.push([c.path, c.path === 'tank.mode' ? 'single' : c.to]);
+      message = `${proposal.message} Surge impedance about ${formatQuantity(a.surgeImpedance, 'resistance', { digits: 3 })}; the tap follows.`;
     }
-    if (a.kind === 'tapRatio' && goal.kind === 'tapRatio') setValue('supply.tuningRatio', String(goal.ratio), opts);
+    if (a.kind === 'tapRatio' && goal.kind === 'tapRatio') {
+      writes.push(['supply.tuningRatio', String(goal.ratio)]);
+      message = `Primary-to-secondary tuning ratio ${getValues('supply.tuningRatio') || '(default)'} → ${goal.ratio}: tap at ${formatFixed(a.tapTurns, 2)} turns.`;
+    }
     if (a.kind === 'coupling' && goal.kind === 'coupling') {
-      setValue('secondary.elevation', lengthInputText(a.elevation, system, 4), opts);
-      setValue('tuning.targetCoupling', String(goal.k), opts);
+      const elevation = lengthInputText(a.elevation, system, 4);
+      writes.push(['secondary.elevation', elevation], ['tuning.targetCoupling', String(goal.k)]);
+      message = `Winding bottom above primary plane ${getValues('secondary.elevation') || '0'} → ${elevation}; Target coupling k set to ${goal.k}.`;
     }
+    const before = writes.map(([path]) => [path, getValues(path)] as [GoalPath, string]);
+    for (const [path, value] of writes) setValue(path, value as never, opts);
+    return { ok: true, message, undo: () => before.forEach(([path, value]) => setValue(path, value as never, opts)) };
   }
 
   function bringBack() {
@@ -206,7 +270,7 @@ function DesignerInner(props: DesignerProps) {
               </form>
               <GoalPanel input={input} system={system} hasPrimary={values.primary.enabled} hasTank={values.tank.mode !== 'none'} bridge={values.supply.kind === 'solid-state'} readOnly={readOnly} apply={applyGoal} />
             </div>
-            <ResultsAside live={live} pending={pending} shown={shown} system={system} onRetry={retry} />
+            <ResultsAside live={live} pending={pending} shown={shown} system={system} onRetry={retry} calibration={props.calibration ?? null} />
           </div>
           {shown && <ChartsPanel design={shown.design} input={input} inputKey={inputKey} system={system} />}
         </div>

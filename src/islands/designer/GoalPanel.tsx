@@ -1,6 +1,5 @@
 import { useId, useState, type FormEvent } from 'react';
-import { formatFixed, formatQuantity, lengthInputText, parseQuantityLazy, type UnitSystem } from '~/lib/format';
-import { designField } from '~/lib/design/registry';
+import { browserDecimalMark, formatFixed, parseQuantityLazy, readNumberText, type UnitSystem } from '~/lib/format';
 import type { Goal, GoalAnswer } from '../../workers/protocol';
 import { solverClient } from './solver-client';
 
@@ -13,14 +12,20 @@ type Props = {
   /** a solid-state supply: offers the drive's goals */
   bridge: boolean;
   readOnly: boolean;
-  /** writes the answer into the form */
-  apply: (answer: GoalAnswer, goal: Goal) => void;
+  /** writes the answer into the form, saying what changed, with an undo */
+  apply: (answer: GoalAnswer, goal: Goal) => GoalApplied;
 };
 
-type Status = { tone: 'ok' | 'fault'; text: string } | null;
+/** What a goal did to the form: what changed (or why nothing did), and how to put it back. */
+export type GoalApplied = { ok: true; message: string; undo: () => void } | { ok: false; message: string };
+
+const TAP_LABEL = 'Tap at (turns from the inner end)';
+const K_LABEL = 'Coupling to reach (sets the secondary elevation)';
+
+type Status = { tone: 'ok' | 'fault'; text: string; undo?: () => void } | null;
 
 /** Goal-first entry: fix what the coil must do and let the solver's inverse functions fill in the input. */
-export function GoalPanel({ input, system, hasPrimary, hasTank, bridge, readOnly, apply }: Props) {
+export function GoalPanel({ input, system: _system, hasPrimary, hasTank, bridge, readOnly, apply }: Props) {
   const [freq, setFreq] = useState('');
   const [tap, setTap] = useState('');
   const [k, setK] = useState('');
@@ -31,15 +36,15 @@ export function GoalPanel({ input, system, hasPrimary, hasTank, bridge, readOnly
   const [busy, setBusy] = useState<Goal['kind'] | null>(null);
   const ids = { f: useId(), t: useId(), k: useId(), p: useId(), c: useId(), r: useId() };
 
-  async function run(goal: Goal, describe: (a: GoalAnswer) => string, unreachable: string) {
+  async function run(goal: Goal, unreachable: string) {
     setBusy(goal.kind);
     try {
       const r = await solverClient().request({ type: 'goal', input, goal });
       if (!r.ok) {
         setStatus((s) => ({ ...s, [goal.kind]: { tone: 'fault', text: r.message ?? 'Fix the fields marked in the design first.' } }));
       } else if (r.reply.type === 'goal' && r.reply.data) {
-        apply(r.reply.data, goal);
-        setStatus((s) => ({ ...s, [goal.kind]: { tone: 'ok', text: describe(r.reply.data as GoalAnswer) } }));
+        const done = apply(r.reply.data, goal);
+        setStatus((s) => ({ ...s, [goal.kind]: done.ok ? { tone: 'ok', text: `Changed: ${done.message}`, undo: done.undo } : { tone: 'fault', text: done.message } }));
       } else setStatus((s) => ({ ...s, [goal.kind]: { tone: 'fault', text: unreachable } }));
     } finally {
       setBusy(null);
@@ -52,29 +57,25 @@ export function GoalPanel({ input, system, hasPrimary, hasTank, bridge, readOnly
     if (!p.ok || !(p.value > 0)) return setStatus((s) => ({ ...s, frequency: { tone: 'fault', text: `Target frequency: ${p.ok ? 'must be above 0' : p.message}` } }));
     void run(
       { kind: 'frequency', hz: p.value },
-      (a) => (a.kind === 'frequency' ? `${designField('secondary.turns').label} set to ${Math.round(a.turns)} (winding ${formatQuantity(a.windingLength, 'length', { system })}).` : ''),
       'No turn count that fits reaches this frequency with this form and wire.',
     );
   }
 
   function onTap(e: FormEvent) {
     e.preventDefault();
-    const t = Number(tap.replace(',', '.'));
-    if (!Number.isFinite(t) || t <= 0) return setStatus((s) => ({ ...s, tap: { tone: 'fault', text: 'Tap: enter the turns from the inner end, e.g. 8.5' } }));
-    void run(
-      { kind: 'tap', turns: t },
-      (a) => (a.kind === 'tap' ? `${designField('tank.capacitance').label} set to ${formatQuantity(a.capacitance, 'capacitance', { digits: 3 })} for a tap at ${formatFixed(t, 2)} turns.` : ''),
-      'No capacitance puts the tap there.',
-    );
+    const read = readNumberText(tap, browserDecimalMark());
+    const t = read?.ok ? read.value : NaN;
+    if (!Number.isFinite(t) || t <= 0) return setStatus((s) => ({ ...s, tap: { tone: 'fault', text: `${TAP_LABEL}: ${read && !read.ok ? read.message : 'enter the turns from the inner end, e.g. 8.5'}` } }));
+    void run({ kind: 'tap', turns: t }, `No tank capacitance puts the tap at ${formatFixed(t, 2)} turns on this primary.`);
   }
 
   function onCoupling(e: FormEvent) {
     e.preventDefault();
-    const v = Number(k.replace(',', '.'));
-    if (!Number.isFinite(v) || v <= 0 || v > 0.9) return setStatus((s) => ({ ...s, coupling: { tone: 'fault', text: 'Target k: enter a number above 0 and at most 0.9, e.g. 0.15' } }));
+    const read = readNumberText(k, browserDecimalMark());
+    const v = read?.ok ? read.value : NaN;
+    if (!Number.isFinite(v) || v <= 0 || v > 0.9) return setStatus((s) => ({ ...s, coupling: { tone: 'fault', text: `${K_LABEL}: enter a number above 0 and at most 0.9, e.g. 0.15` } }));
     void run(
       { kind: 'coupling', k: v },
-      (a) => (a.kind === 'coupling' ? `Secondary elevation set to ${lengthInputText(a.elevation, system, 4)} for k = ${v}.` : ''),
       'No secondary elevation gives this k with this primary; more primary turns near the secondary couple tighter.',
     );
   }
@@ -85,7 +86,6 @@ export function GoalPanel({ input, system, hasPrimary, hasTank, bridge, readOnly
     if (!p.ok || !(p.value > 0)) return setStatus((s) => ({ ...s, onTime: { tone: 'fault', text: `Target peak current: ${p.ok ? 'must be above 0' : p.message}` } }));
     void run(
       { kind: 'onTime', peak: p.value },
-      (a) => (a.kind === 'onTime' ? `${designField('supply.onTime').label} set to ${formatQuantity(a.onTime, 'time', { digits: 3 })} for ${formatQuantity(p.value, 'current', { digits: 3 })}.` : ''),
       'The primary current does not reach this peak within 1 ms: losses and the secondary’s load cap it.',
     );
   }
@@ -96,10 +96,6 @@ export function GoalPanel({ input, system, hasPrimary, hasTank, bridge, readOnly
     if (!p.ok || !(p.value > 0)) return setStatus((s) => ({ ...s, tankForCurrent: { tone: 'fault', text: `Target peak current: ${p.ok ? 'must be above 0' : p.message}` } }));
     void run(
       { kind: 'tankForCurrent', peak: p.value },
-      (a) =>
-        a.kind === 'tankForCurrent'
-          ? `Tank set near ${formatQuantity(a.capacitance, 'capacitance', { digits: 3 })} (surge impedance ${formatQuantity(a.surgeImpedance, 'resistance', { digits: 3 })}); the tap follows.`
-          : '',
       'No tank capacitance gives this peak at this on-time.',
     );
   }
@@ -110,7 +106,6 @@ export function GoalPanel({ input, system, hasPrimary, hasTank, bridge, readOnly
     if (!Number.isFinite(v) || v < 0.5 || v > 1.5) return setStatus((s) => ({ ...s, tapRatio: { tone: 'fault', text: 'Ratio: enter a number between 0.5 and 1.5, e.g. 0.9' } }));
     void run(
       { kind: 'tapRatio', ratio: v },
-      (a) => (a.kind === 'tapRatio' ? `${designField('supply.tuningRatio').label} set to ${v}: tap at ${formatFixed(a.tapTurns, 2)} turns.` : ''),
       'No tap of this primary reaches that ratio with this tank.',
     );
   }
@@ -118,9 +113,23 @@ export function GoalPanel({ input, system, hasPrimary, hasTank, bridge, readOnly
   const line = (kind: Goal['kind']) => {
     const s = status[kind];
     return (
-      <p role="status" className={s ? (s.tone === 'ok' ? 'text-sm text-sound' : 'cw-field-error') : 'sr-only'}>
-        {s?.text ?? ''}
-      </p>
+      <div>
+        <p role="status" className={s ? (s.tone === 'ok' ? 'text-sm text-sound' : 'cw-field-error') : 'sr-only'} data-goal-status={kind}>
+          {s?.text ?? ''}
+        </p>
+        {s?.undo && (
+          <button
+            type="button"
+            className="cw-btn cw-btn-quiet mt-1 text-sm"
+            onClick={() => {
+              s.undo?.();
+              setStatus((st) => ({ ...st, [kind]: { tone: 'ok', text: 'Put back as it was.' } }));
+            }}
+          >
+            Undo
+          </button>
+        )}
+      </div>
     );
   };
 
@@ -147,19 +156,19 @@ export function GoalPanel({ input, system, hasPrimary, hasTank, bridge, readOnly
       <form onSubmit={onTap} className="grid gap-2 sm:grid-cols-[1fr_auto] sm:items-end">
         <div>
           <label htmlFor={ids.t} className="cw-label text-sm">
-            Tap at (turns from the inner end)
+            {TAP_LABEL}
           </label>
           <input id={ids.t} className="cw-input" value={tap} onChange={(e) => setTap(e.target.value)} placeholder="e.g. 8.5" inputMode="decimal" disabled={readOnly || !hasPrimary} autoComplete="off" />
         </div>
         <button type="submit" className="cw-btn cw-btn-quiet" disabled={readOnly || !hasPrimary || busy !== null}>
-          Fill in tank capacitance
+          Fill in the tank
         </button>
         <div className="sm:col-span-2">{hasPrimary ? line('tap') : <p className="cw-hint">Needs a primary.</p>}</div>
       </form>
       <form onSubmit={onCoupling} className="grid gap-2 sm:grid-cols-[1fr_auto] sm:items-end">
         <div>
           <label htmlFor={ids.k} className="cw-label text-sm">
-            {designField('tuning.targetCoupling').label}
+            {K_LABEL}
           </label>
           <input id={ids.k} className="cw-input" value={k} onChange={(e) => setK(e.target.value)} placeholder="e.g. 0.15" inputMode="decimal" disabled={readOnly || !hasPrimary} autoComplete="off" />
         </div>

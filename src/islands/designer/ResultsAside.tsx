@@ -1,5 +1,7 @@
 import type { DesignSI, Result } from '~/solver';
-import type { UnitSystem } from '~/lib/format';
+import type { Calibration } from '~/lib/buildsheet/calibration';
+import { lengthsInSystem, type UnitSystem } from '~/lib/format';
+import { fieldLabel, plainMessage } from '~/lib/design/labels';
 import { CoilDrawing } from '../drawing/CoilDrawing';
 import { fieldId } from './form/field-context';
 import { ResultsPanel } from './results/ResultsPanel';
@@ -11,10 +13,11 @@ type Props = {
   shown: { design: DesignSI; result: Result } | null;
   system: UnitSystem;
   onRetry: () => void;
+  calibration?: Calibration | null;
 };
 
 /** The live results beside the form: solve state, what the results wait for, the drawing and the figures. */
-export function ResultsAside({ live, pending, shown, system, onRetry }: Props) {
+export function ResultsAside({ live, pending, shown, system, onRetry, calibration }: Props) {
   const issues = live.status === 'invalid' ? live.issues : [];
   return (
     <aside aria-labelledby="results-title" className="space-y-4">
@@ -43,7 +46,7 @@ export function ResultsAside({ live, pending, shown, system, onRetry }: Props) {
           <ul className="mt-1 list-disc pl-5">
             {issues.slice(0, 6).map((i) => (
               <li key={`${i.path}-${i.message}`}>
-                <a href={`#${fieldId(i.path)}`}>{i.path}</a>: {i.message}
+                <a href={`#${fieldId(i.path)}`}>{fieldLabel(i.path)}</a>: {lengthsInSystem(plainMessage(i.message), system)}
               </li>
             ))}
           </ul>
@@ -57,7 +60,7 @@ export function ResultsAside({ live, pending, shown, system, onRetry }: Props) {
             </h3>
             <CoilDrawing design={shown.design} result={shown.result} system={system} />
           </section>
-          <ResultsPanel result={shown.result} system={system} stale={live.status !== 'ok'} />
+          <ResultsPanel result={shown.result} system={system} stale={live.status !== 'ok'} calibration={calibration} design={shown.design} />
         </>
       ) : (
         <p className="text-sm text-ink-soft">Computing…</p>

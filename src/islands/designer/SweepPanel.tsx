@@ -1,6 +1,7 @@
 import { lazy, Suspense, useId, useMemo, useState, type FormEvent } from 'react';
 import { sweepablePaths, type DesignSI } from '~/solver';
-import { formatSignificant, lengthInputText, formatQuantity, parseQuantityLazy, type UnitSystem } from '~/lib/format';
+import { formatSignificant, lengthInputText, lengthsInSystem, formatQuantity, parseQuantityLazy, readNumberText, type UnitSystem } from '~/lib/format';
+import { findDesignField } from '~/lib/design/registry';
 import type { SweepData } from '../../workers/protocol';
 import { solverClient } from './solver-client';
 import { currentValue, defaultRange, SWEEP_INPUTS, SWEEP_SERIES_OPTIONS, type SweepInput } from './sweep-inputs';
@@ -17,8 +18,8 @@ function rangeText(v: number, s: SweepInput, system: UnitSystem): string {
 
 async function readRange(text: string, s: SweepInput): Promise<{ ok: true; value: number } | { ok: false; message: string }> {
   if (s.quantity === null) {
-    const n = Number(text.trim().replace(',', '.'));
-    return Number.isFinite(n) && text.trim() !== '' ? { ok: true, value: n } : { ok: false, message: 'expected a number' };
+    const r = readNumberText(text);
+    return r?.ok ? { ok: true, value: r.value } : { ok: false, message: r ? r.message : 'expected a number' };
   }
   return parseQuantityLazy(text, s.quantity);
 }
@@ -57,18 +58,31 @@ export function SweepPanel({ design, input, system }: Props) {
     const a = await readRange(from, spec);
     const b = await readRange(to, spec);
     const n = Number(points);
-    if (!a.ok) return setError(`From: ${a.message}`);
-    if (!b.ok) return setError(`To: ${b.message}`);
-    if (!(a.value < b.value)) return setError('From must be less than To.');
-    if (!Number.isInteger(n) || n < 2 || n > 400) return setError('Points: a whole number from 2 to 400.');
+    // a refused sweep leaves no old chart behind
+    const fail = (message: string) => {
+      setData(null);
+      setError(message);
+    };
+    const field = findDesignField(spec.path);
+    const label = field?.label ?? spec.name;
+    if (!a.ok) return fail(`From (${label}): ${a.message}`);
+    if (!b.ok) return fail(`To (${label}): ${b.message}`);
+    const bounds = field?.bounds;
+    for (const [end, v] of [['From', a.value], ['To', b.value]] as const) {
+      if (bounds && !(bounds.minInclusive ? v >= bounds.min : v > bounds.min) || (bounds && v > bounds.max)) {
+        return fail(lengthsInSystem(`${end} (${label}): must be ${bounds!.label}, the same check as the form's`, system));
+      }
+    }
+    if (!(a.value < b.value)) return fail('From must be less than To.');
+    if (!Number.isInteger(n) || n < 2 || n > 400) return fail('Number of points: a whole number from 2 to 400.');
     const chosen = seriesOptions.filter((o) => series.includes(o.key)).map((o) => o.key);
-    if (chosen.length === 0) return setError('Choose at least one quantity to plot.');
+    if (chosen.length === 0) return fail('Choose at least one quantity to plot.');
     setError(null);
     setBusy(true);
     const r = await solverClient().request({ type: 'sweep', input, sweep: { path: spec.path, from: a.value, to: b.value, points: n, series: chosen } });
     setBusy(false);
     if (r.ok && r.reply.type === 'sweep') setData({ sweep: r.reply.data, spec });
-    else if (!r.ok) setError(r.message ?? 'Fix the fields marked in the design first.');
+    else if (!r.ok) fail(r.message ?? 'Fix the fields marked in the design first.');
   }
 
   const shown = data ? SWEEP_SERIES_OPTIONS.filter((o) => data.sweep.series.includes(o.key)) : [];
@@ -145,6 +159,8 @@ export function SweepPanel({ design, input, system }: Props) {
             series={shown.map((o) => ({ key: o.key, name: o.name, kind: o.display, siUnit: o.siUnit }))}
             system={system}
             filename={`sweep-${data.spec.path.replace(/\./g, '-')}.csv`}
+            invalid={data.sweep.invalid ?? []}
+            invalidReason={data.sweep.invalidReason ?? null}
           />
         </Suspense>
       )}

@@ -46,6 +46,8 @@ function CoilDrawingView({ design, result, system = 'metric', className }: Props
 
   const g = coilSection(si);
   const tap = result?.tuning?.tapTurns ?? null;
+  // one datum, one number: the drawing gives the primary's outside diameter the results table gives
+  const primaryOuter = result?.primary?.outerDiameter ?? 2 * (g.primary?.outerRadius ?? 0);
   const L = (m: number) => formatLength(m, system, 3);
 
   const w = g.box.rMax * MM;
@@ -151,13 +153,13 @@ function CoilDrawingView({ design, result, system = 'metric', className }: Props
         {g.primary && (
           <Dimension
             id="primary-diameter"
-            x1={-g.primary.outerRadius * MM}
-            x2={g.primary.outerRadius * MM}
+            x1={-primaryOuter / 2 * MM}
+            x2={primaryOuter / 2 * MM}
             y1={y(g.groundZ) - font * 2.4}
             y2={y(g.groundZ) - font * 2.4}
             font={font * 0.85}
             side="before"
-            label={`primary ⌀ ${L(2 * g.primary.outerRadius)}`}
+            label={`primary outside ⌀ ${formatLength(primaryOuter, system, 4)}`}
           />
         )}
       </svg>

@@ -1,8 +1,9 @@
+import { LocalDate } from '~/components/LocalDate';
 import { useState } from 'react';
 import { failureMessage } from '~/lib/api/client';
 import { withApi } from '~/lib/api/provider';
 import { useRestoreRevision } from '~/lib/api/queries/designs';
-import { formatDate, formatSi, formatTurns } from '~/lib/format';
+import { formatSi, formatTurns } from '~/lib/format';
 
 export type RevisionRow = {
   revision: number;
@@ -17,7 +18,7 @@ export type RevisionRow = {
 type Props = { designId: string; latest: number; canWrite: boolean; revisions: RevisionRow[] };
 
 function when(iso: string) {
-  return formatDate(iso, true);
+  return <LocalDate iso={iso} withTime />;
 }
 
 /** Every revision, newest first; pick two to compare, open one read-only, or restore one as a new revision. */

@@ -1,3 +1,5 @@
+import { LocalDate } from '~/components/LocalDate';
+import { issueText } from '~/lib/design/labels';
 import { useCallback, useMemo, useRef, useState, type FormEvent } from 'react';
 import {
   createColumnHelper,
@@ -12,7 +14,7 @@ import {
 } from '@tanstack/react-table';
 import { FormMessage } from '~/components/ui/FormMessage';
 import { SortableTableHead } from '~/components/ui/SortableTableHead';
-import { formatDate, formatSi, formatTurns } from '~/lib/format';
+import { formatSi, formatTurns } from '~/lib/format';
 import { checkDesignName } from '~/lib/design/name';
 import { Dialog } from './Dialog';
 import { ApiFailure, failureMessage } from '~/lib/api/client';
@@ -88,7 +90,7 @@ function LibraryTable({ pageSize = 20 }: Props) {
       () => importFile.mutateAsync(parsed),
       `Imported ${file.name}.`,
       (f) => {
-        const detail = f.issues.slice(0, 5).map((i) => `${i.path || 'file'}: ${i.message}`).join('; ');
+        const detail = f.issues.slice(0, 5).map((i) => issueText({ path: i.path || 'file', message: i.message })).join('; ');
         return detail ? `${f.message} ${detail}` : f.message;
       },
     );
@@ -110,8 +112,22 @@ function LibraryTable({ pageSize = 20 }: Props) {
         sortUndefined: 'last',
         cell: (c) => <span className="tabular-nums">{formatSi(c.getValue(), 'Hz', 3)}</span>,
       }),
-      column.accessor('tapTurns', { header: 'Tap', cell: (c) => <span className="tabular-nums">{formatTurns(c.getValue())}</span> }),
-      column.accessor('updatedAt', { header: 'Updated', sortingFn: 'datetime', cell: (c) => formatDate(c.getValue(), true) }),
+      column.accessor((d) => d.calibratedTapTurns ?? d.tapTurns, {
+        id: 'tapTurns',
+        header: 'Tap',
+        cell: (c) => {
+          const d = c.row.original;
+          const calibrated = d.calibratedTapTurns ?? null;
+          return calibrated === null ? (
+            <span className="tabular-nums" data-tap="predicted">{formatTurns(d.tapTurns)}</span>
+          ) : (
+            <span className="tabular-nums">
+              <span data-tap="calibrated">{formatTurns(calibrated)}</span> <span className="text-xs text-ink-soft">measured; predicted {formatTurns(d.tapTurns)}</span>
+            </span>
+          );
+        },
+      }),
+      column.accessor('updatedAt', { header: 'Updated', sortingFn: 'datetime', cell: (c) => <LocalDate iso={c.getValue()} withTime /> }),
       column.accessor('groupId', {
         header: 'Group',
         // '' is any; NO_GROUP keeps the designs that belong to no group

@@ -34,7 +34,7 @@ export default function DesignFacts({ design, result, headline = true }: Props) 
                 ))}
               </tbody>
             </table>
-            {b.title.startsWith('Predicted') && typeof energy === 'number' && (
+            {b.title === 'Decides the build' && typeof energy === 'number' && (
               <SafetyNote kind="stored-energy" className="mt-3">
                 <p className="mt-1">This tank stores about {formatSi(energy, 'J', LIBRARY_DIGITS)} at the supply peak.</p>
               </SafetyNote>

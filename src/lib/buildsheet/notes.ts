@@ -19,10 +19,28 @@ export const COATING_NOTES: readonly SheetNote[] = [
   { text: 'The coating mainly stops turns shifting and protects the winding; its electrical benefit is uncertain.', source: 'laushaus.com/tesla/secondary.htm' },
 ];
 
+const SAFETY_GAP_AT_9KV = 'Safety gap from each high-voltage terminal to the grounded case, about 1/4 in (6 mm) on a 9 kV transformer.';
+
+/** The source's safety-gap setting: 1/4 in (6.35 mm) for a 9 kV transformer. */
+export const SAFETY_GAP_REFERENCE = { gap: 6.35e-3, voltage: 9000 } as const;
+
+/**
+ * The protection notes for a transformer of this RMS output voltage: the safety-gap starting width scaled in
+ * proportion from the source's 1/4 in at 9 kV (the proportion is common practice, a starting point only: the
+ * setting procedure that follows decides the gap).
+ */
+export function transformerProtectionNotes(voltageRms: number | null): readonly SheetNote[] {
+  if (voltageRms === null || !(voltageRms > 0)) return TRANSFORMER_PROTECTION_NOTES;
+  const gap = (SAFETY_GAP_REFERENCE.gap * voltageRms) / SAFETY_GAP_REFERENCE.voltage;
+  const kv = Number((voltageRms / 1000).toPrecision(3));
+  const text = `Safety gap from each high-voltage terminal to the grounded case: start near ${(gap * 1000).toFixed(1)} mm (${(gap / 0.0254).toFixed(2)} in) for this ${kv} kV transformer, scaled in proportion from about 1/4 in (6 mm) on a 9 kV transformer (the proportion is common practice; set it as below).`;
+  return TRANSFORMER_PROTECTION_NOTES.map((n) => (n.text === SAFETY_GAP_AT_9KV ? { ...n, text } : n));
+}
+
 export const TRANSFORMER_PROTECTION_NOTES: readonly SheetNote[] = [
   { text: 'Filter between the transformer and the tank: a 1 kΩ 50 W wire-wound resistor in series with each high-voltage lead (100 W for several transformers in parallel).', source: 'hotstreamer.deanostoybox.com/greg/filter.htm' },
   { text: 'Bypass capacitors of 1 nF / 10 kV from each lead to the grounded case: two up to about 9 kV, four above.', source: 'hotstreamer.deanostoybox.com/greg/filter.htm' },
-  { text: 'Safety gap from each high-voltage terminal to the grounded case, about 1/4 in (6 mm) on a 9 kV transformer.', source: 'hotstreamer.deanostoybox.com/greg/filter.htm' },
+  { text: SAFETY_GAP_AT_9KV, source: 'hotstreamer.deanostoybox.com/greg/filter.htm' },
   { text: 'Setting it: disconnect the tank; set the gap so it just fails to fire at the highest input the transformer will see; never widen it later to chase spark length; in use, open the main gap until the safety gap fires only now and then.', source: 'G. Reynolds, TCML 2005/Oct/msg00473' },
   { text: 'Build the filter on polyethylene board, not PVC: surface tracking matters more than air spacing.', source: 'D. C. Cox, TCML 2005/Oct/msg00483' },
   { text: 'Ground the transformer case and centre tap to the RF ground.', source: 'TCML 1995/may/msg00010' },

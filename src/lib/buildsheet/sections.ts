@@ -1,6 +1,7 @@
 import * as fmt from './format';
+import { designField } from '../design/registry';
 import { METRES_PER_INCH } from '../format/length';
-import { BANK_NOTES, COATING_NOTES, SAFETY_CHECKLIST, SOLID_STATE_NOTES, TRANSFORMER_PROTECTION_NOTES, WINDING_NOTES, type SheetNote } from './notes';
+import { BANK_NOTES, COATING_NOTES, SAFETY_CHECKLIST, SOLID_STATE_NOTES, transformerProtectionNotes, WINDING_NOTES, type SheetNote } from './notes';
 import type { BuildSheet } from './sheet';
 
 export interface SheetRow {
@@ -45,6 +46,15 @@ export function sheetSections(sheet: BuildSheet): SheetSection[] {
         { label: 'Wire', value: wire, note: `${fmt.lengthFine(s.insulatedDiameter)} over the enamel` },
         { label: 'Turns per length', value: `${fmt.sig(s.turnsPerMetre / 100, 4)} per cm (${fmt.sig(s.turnsPerMetre * METRES_PER_INCH, 4)} per in)`, note: `pitch ${fmt.lengthFine(s.pitch)}` },
         { label: 'Wire length (computed)', value: fmt.lengthLong(s.wireLength) },
+        ...(s.quarterWaveFrequency !== null
+          ? [
+              {
+                label: 'Quarter-wave figure of this wire, c / (4 × length)',
+                value: fmt.frequency(s.quarterWaveFrequency),
+                note: `for comparison only: the wound coil resonates at ${fmt.frequency(s.bareFrequency)} without topload (${fmt.sig(s.bareFrequency / s.quarterWaveFrequency, 3)} ×), because winding the wire into a solenoid changes the wave speed along it; see /methods`,
+              },
+            ]
+          : []),
         { label: 'Wire to buy', value: fmt.lengthLong(s.wireToBuy), note: `with ${fmt.percent(o.margin, 0)} extra for leads and mistakes` },
         { label: 'Copper mass (computed)', value: fmt.mass(s.wireMass) },
         { label: 'Copper mass to buy', value: fmt.mass(s.massToBuy) },
@@ -70,10 +80,34 @@ export function sheetSections(sheet: BuildSheet): SheetSection[] {
     { id: 'coating', title: 'Coating and sealing', rows: [], notes: COATING_NOTES },
   ];
 
+  const tl = sheet.topload;
+  if (tl) {
+    const rows: SheetRow[] =
+      tl.shape === 'toroid'
+        ? [
+            { label: 'Shape', value: 'toroid' },
+            { label: 'Overall diameter', value: fmt.lengthShort(tl.majorDiameter!) },
+            { label: 'Tube diameter', value: fmt.lengthShort(tl.minorDiameter!), note: 'duct or spun tube of this cross-section' },
+            { label: 'Ring centre-line diameter', value: fmt.lengthShort(tl.majorDiameter! - tl.minorDiameter!), note: 'where to bend the tube' },
+          ]
+        : [
+            { label: 'Shape', value: 'sphere' },
+            { label: 'Diameter', value: fmt.lengthShort(tl.diameter!) },
+          ];
+    rows.push({ label: 'Centre above the top turn', value: fmt.lengthShort(tl.elevation), note: 'from the top turn to the topload centre' });
+    if (tl.capacitance !== null) rows.push({ label: 'Capacitance (computed)', value: fmt.capacitance(tl.capacitance) });
+    out.push({ id: 'topload', title: 'Topload', rows });
+  }
+
   const p = sheet.primary;
   if (p) {
     const rows: SheetRow[] = [
       { label: 'Shape', value: `${p.shape}, ${fmt.plain(p.turns, 4)} turns of ${fmt.lengthShort(p.conductorDiameter)} conductor` },
+      { label: designField('primary.innerDiameter').label, value: fmt.lengthShort(p.innerDiameter), note: 'centre line of the conductor' },
+      { label: 'Gap between turns', value: fmt.lengthShort(p.spacing), note: 'between conductor surfaces' },
+      { label: 'Outside diameter', value: fmt.lengthShort(p.outerDiameter), note: 'over the conductor of the outermost turn' },
+      { label: 'Innermost turn above the primary plane', value: fmt.lengthShort(p.elevation) },
+      ...(p.angle !== null ? [{ label: designField('primary.angle').label, value: `${fmt.plain((p.angle * 180) / Math.PI, 3)}°` }] : []),
       { label: 'Conductor length (all turns)', value: fmt.lengthLong(p.conductorLength) },
       { label: 'Conductor to buy', value: fmt.lengthLong(p.conductorToBuy), note: `with ${fmt.percent(o.margin, 0)} extra; add the leads to the tank and gap` },
     ];
@@ -117,12 +151,33 @@ export function sheetSections(sheet: BuildSheet): SheetSection[] {
       if (b.perUnitVoltage !== null) rows.push({ label: 'Voltage per unit at supply peak', value: fmt.voltage(b.perUnitVoltage) });
       if (!d) rows.push({
         label: 'Bleeders',
-        value: `${b.bleeder.count} × ${fmt.resistance(b.bleeder.resistance)} ½ W, one across each unit`,
+        value:
+          b.bleeder.inSeries > 1
+            ? `${b.bleeder.count} × (${b.bleeder.inSeries} in series) ${fmt.resistance(b.bleeder.resistance / b.bleeder.inSeries)} ½ W, one chain across each unit`
+            : `${b.bleeder.count} × ${fmt.resistance(b.bleeder.resistance)} ½ W, one across each unit`,
         note:
           b.bleeder.power !== null
-            ? `each dissipates V²/R = ${fmt.power(b.bleeder.power)}${b.bleeder.withinRating ? ', within ½ W' : ': above ½ W, use a higher-rated resistor'}; time constant ${fmt.sig(b.bleeder.timeConstant, 3)} s`
+            ? `each unit's bleeder dissipates V²/R = ${fmt.power(b.bleeder.power)}${b.bleeder.withinRating ? ', within ½ W' : ': above ½ W, use a higher-rated resistor'}; time constant ${fmt.sig(b.bleeder.timeConstant, 3)} s`
             : `time constant ${fmt.sig(b.bleeder.timeConstant, 3)} s`,
       });
+      if (b.perUnitVoltage !== null) {
+        const perResistor = b.perUnitVoltage / b.bleeder.inSeries;
+        rows.push({
+          label: 'Bleeder voltage check',
+          value: `${fmt.voltage(perResistor)} across each resistor, rated ${fmt.voltage(b.bleeder.ratedVoltage)}`,
+          note:
+            b.bleeder.voltageWithinRating
+              ? `within the ${fmt.voltage(b.bleeder.ratedVoltage)} working voltage of a common ½ W film resistor (common practice; check the part's datasheet)`
+              : `${fmt.voltage(b.perUnitVoltage)} per unit is above the ${fmt.voltage(b.bleeder.ratedVoltage)} working voltage of a common ½ W film resistor (common practice), so ${b.bleeder.inSeries} resistors go in series across each unit; or use one resistor rated for ${fmt.voltage(b.perUnitVoltage)}`,
+        });
+      }
+      if (b.ratingMargin !== null) {
+        rows.push({
+          label: 'Capacitor voltage check',
+          value: `${fmt.voltage(b.perUnitVoltage!)} across each unit, rated ${fmt.voltage(b.unitVoltage)}`,
+          note: b.ratingMargin >= 2 ? 'at least 2 × the supply peak across the string (common practice)' : `only ${fmt.sig(b.ratingMargin, 3)} × the supply peak: add units in series for at least 2 × (common practice)`,
+        });
+      }
     }
     out.push({ id: 'tank', title: 'Tank capacitor bank', rows, notes: d ? BANK_NOTES.filter((n) => !/bleeder/i.test(n.text)) : BANK_NOTES, caution: 'stored-energy' });
   }
@@ -182,12 +237,20 @@ export function sheetSections(sheet: BuildSheet): SheetSection[] {
     if (sup.resonantCapacitance !== null) rows.push({ label: 'Resonant capacitance of the transformer', value: fmt.capacitance(sup.resonantCapacitance), note: 'C = I/(2π f V) (P. Lawrence, TCML 2003/June/msg00590)' });
     if (sup.ltrCapacitance !== null) rows.push({ label: 'Larger-than-resonant value', value: fmt.capacitance(sup.ltrCapacitance), note: '1/(4 f Z): charges to full peak in a quarter cycle (bartmcguyer.com, note 1)' });
     if (sup.tankToResonantRatio !== null) rows.push({ label: 'Tank / resonant', value: `${fmt.sig(sup.tankToResonantRatio, 3)} ×`, note: 'near 1 × risks resonant rise with a static or rotary gap (TCML 2003/June/msg00590; B. Hickman, TCML 1999/January/msg00788)' });
-    if (sup.filterBypassCapacitors !== null) rows.push({ label: 'Filter bypass capacitors', value: `${sup.filterBypassCapacitors} × 1 nF / 10 kV`, note: 'two up to about 9 kV, four above (hotstreamer.deanostoybox.com/greg/filter.htm)' });
+    if (sup.filterBypassCapacitors !== null) {
+      rows.push({ label: 'Filter bypass capacitors', value: `${sup.filterBypassCapacitors} × 1 nF / 10 kV`, note: 'two up to about 9 kV, four above (hotstreamer.deanostoybox.com/greg/filter.htm)' });
+      const perCap = (sup.peakVoltage / 2) / (sup.filterBypassCapacitors / 2);
+      rows.push({
+        label: 'Bypass capacitor voltage check',
+        value: `${fmt.voltage(perCap)} across each, rated 10 kV`,
+        note: `each lead peaks at half the ${fmt.voltage(sup.peakVoltage)} output against the centre-tapped case, shared by the capacitors in series on that lead${perCap <= 10000 ? '; within rating' : '; above rating: add capacitors in series'}`,
+      });
+    }
     out.push({
       id: 'supply',
       title: 'Supply and protection',
       rows,
-      notes: sup.kind === 'transformer' ? TRANSFORMER_PROTECTION_NOTES : SOLID_STATE_NOTES,
+      notes: sup.kind === 'transformer' ? transformerProtectionNotes(sup.voltage) : SOLID_STATE_NOTES,
       caution: 'supply',
     });
   }

@@ -10,6 +10,12 @@ export const MIN_END_MARGIN = 1 * INCH;
 export const DEFAULT_END_MARGIN = 1.5 * INCH;
 /** Bleeder wattage the trade fits across each capacitor: ½ W (T. Fritz, Tesla Coil Mailing List, Feb 2000, pupman.com archive; common practice). */
 export const BLEEDER_RATED_POWER = 0.5;
+/**
+ * Working voltage of a common ½ W film resistor, checked against the voltage across each bleeder: 350 V
+ * (common practice: the usual limiting element voltage printed for ½ W carbon- and metal-film parts; check the
+ * part's own datasheet).
+ */
+export const BLEEDER_RATED_VOLTAGE = 350;
 /** Pulse capacitor commonly bought by the hundred for banks: 0.15 µF, 2000 V DC (hvtesla.com MMC notes; common practice). */
 export const COMMON_BANK_UNIT = { capacitance: 0.15e-6, voltage: 2000 } as const;
 /** String rating at least 2 × the supply peak (common practice; no primary source found). */
@@ -50,7 +56,19 @@ export interface BankLayout {
   ratingMargin: number | null;
   /** true when the bank is our suggestion from a common unit (the design gave only a capacitance) */
   suggested: boolean;
-  bleeder: { resistance: number; ratedPower: number; power: number | null; count: number; withinRating: boolean | null; timeConstant: number };
+  bleeder: {
+    resistance: number;
+    ratedPower: number;
+    power: number | null;
+    count: number;
+    withinRating: boolean | null;
+    timeConstant: number;
+    /** the working voltage checked against, and whether the voltage across each bleeder is within it */
+    ratedVoltage: number;
+    voltageWithinRating: boolean | null;
+    /** resistors in series across each unit to keep each within its working voltage */
+    inSeries: number;
+  };
 }
 
 /** Current-transformer ratios the trade picks (common practice, from memory): 1:N with N from this list. */
@@ -99,6 +117,10 @@ export interface BuildSheet {
     windingLength: number;
     formLength: number;
     wireLength: number;
+    /** c / (4 × wire length): the straight-wire comparison, for the wire section only */
+    quarterWaveFrequency: number | null;
+    /** the wound coil's own resonance without topload, beside it */
+    bareFrequency: number;
     wireToBuy: number;
     wireMass: number;
     massToBuy: number;
@@ -109,8 +131,23 @@ export interface BuildSheet {
     dcResistance: number;
     checkpoints: Checkpoint[];
   };
+  topload: null | {
+    shape: 'toroid' | 'sphere';
+    /** toroid: overall and tube diameters; sphere: its diameter */
+    majorDiameter: number | null;
+    minorDiameter: number | null;
+    diameter: number | null;
+    /** centre above the top turn of the winding */
+    elevation: number;
+    capacitance: number | null;
+  };
   primary: null | {
     shape: string;
+    innerDiameter: number;
+    outerDiameter: number;
+    spacing: number;
+    elevation: number;
+    angle: number | null;
     turns: number;
     conductorDiameter: number;
     conductorLength: number;
@@ -169,6 +206,11 @@ export function buildSheet(design: DesignSI, result: Result, options: BuildSheet
     p && result.primary
       ? {
           shape: p.shape,
+          innerDiameter: p.innerDiameter,
+          outerDiameter: result.primary.outerDiameter,
+          spacing: p.spacing,
+          elevation: p.elevation,
+          angle: p.angle,
           turns: p.turns,
           conductorDiameter: p.conductorDiameter,
           conductorLength: result.primary.conductorLength,
@@ -230,6 +272,8 @@ export function buildSheet(design: DesignSI, result: Result, options: BuildSheet
       windingLength: sec.windingLength,
       formLength: sec.windingLength + 2 * endMargin,
       wireLength: sec.wireLength,
+      quarterWaveFrequency: result.system?.quarterWaveFrequency ?? null,
+      bareFrequency: sec.resonantFrequency,
       wireToBuy,
       wireMass: sec.wireMass,
       massToBuy,
@@ -239,6 +283,17 @@ export function buildSheet(design: DesignSI, result: Result, options: BuildSheet
       dcResistance: sec.dcResistance,
       checkpoints,
     },
+    topload:
+      design.topload
+        ? {
+            shape: design.topload.shape,
+            majorDiameter: design.topload.shape === 'toroid' ? design.topload.majorDiameter : null,
+            minorDiameter: design.topload.shape === 'toroid' ? design.topload.minorDiameter : null,
+            diameter: design.topload.shape === 'sphere' ? design.topload.diameter : null,
+            elevation: design.topload.elevation,
+            capacitance: result.topload?.capacitance ?? null,
+          }
+        : null,
     primary,
     tank,
     supply,
@@ -266,6 +321,9 @@ function layout(unitC: number, unitV: number, series: number, parallel: number, 
       count: series * parallel,
       withinRating: power === null ? null : power <= BLEEDER_RATED_POWER,
       timeConstant: BLEEDER_RESISTANCE_PER_UNIT * unitC,
+      ratedVoltage: BLEEDER_RATED_VOLTAGE,
+      voltageWithinRating: perUnit === null ? null : perUnit <= BLEEDER_RATED_VOLTAGE,
+      inSeries: perUnit === null ? 1 : Math.max(1, Math.ceil(perUnit / BLEEDER_RATED_VOLTAGE)),
     },
   };
 }

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { QUANTITY_KINDS, type QuantityKind } from '../format/units';
 import { parseQuantity } from '../format/units-mathjs';
+import { readNumberText } from '../format/read-number';
 import { designField, type Bounds, type PathOfKind } from './registry';
 
 export type { Bounds };
@@ -52,7 +53,7 @@ export function count(bounds: Bounds, description: string, integer: boolean) {
           ? 'is required'
           : typeof iss.input === 'number'
             ? 'expected a finite number'
-            : `expected ${integer ? 'a whole number' : 'a number'}`,
+            : notANumber(iss.input, integer),
     })
     .superRefine((v, ctx) => {
       if (!Number.isFinite(v)) ctx.addIssue({ code: 'custom', message: 'expected a finite number' });
@@ -60,6 +61,16 @@ export function count(bounds: Bounds, description: string, integer: boolean) {
       else if (!inBounds(v, bounds)) ctx.addIssue({ code: 'custom', message: rangeMessage(bounds, String(v)) });
     })
     .describe(description);
+}
+
+/** Why a text is not the number a plain-number field takes: the number rule's refusal, or what was expected. */
+function notANumber(input: unknown, integer: boolean): string {
+  const expected = integer ? 'a whole number' : 'a number';
+  if (typeof input !== 'string') return `expected ${expected}`;
+  const r = readNumberText(input);
+  if (r && !r.ok) return `expected ${expected}; ${r.message}`;
+  if (r?.ok) return `expected ${expected}, got the text "${input}"`;
+  return `expected ${expected}, got "${input.slice(0, 40)}"`;
 }
 
 /** Reads an already validated quantity into SI. */

@@ -589,6 +589,11 @@ export function pathsOfKind<K extends FieldKind>(kind: K): Array<PathOfKind<K>> 
   return DESIGN_FIELDS.filter((f) => f.kind === kind).map((f) => f.path) as Array<PathOfKind<K>>;
 }
 
+/** The one rule for a number typed without its unit, said beside every quantity field and on the event sheet. */
+export const BARE_NUMBER_RULE = 'a number alone is refused: give its unit';
+/** How counts read grouped digits, said beside every count field. */
+export const GROUPING_RULE = '1,000 and 1 000 both read as 1000';
+
 /** The design's parts, in the order a builder works through a coil, with their headings. */
 export const DESIGN_PARTS = [
   { key: 'secondary', title: 'Secondary' },

@@ -10,8 +10,9 @@ export {
   type UnitSystem,
   type LengthParts,
 } from './length';
-export { formatQuantity, axisUnit, siUnitOfDisplay, type DisplayKind, type FormatOptions } from './quantity';
-export { convertLengthText, readLength } from './convert';
+export { formatQuantity, axisUnit, scaledAxisUnit, siUnitOfDisplay, type DisplayKind, type FormatOptions } from './quantity';
+export { convertLengthText, readLength, lengthsInSystem, roundedLengthText, BUILDER_STEP } from './convert';
+export { NUMBER_RULE_TEXT, readNumberText, canonicalNumberText, decimalMarkOf, browserDecimalMark, type DecimalMark } from './read-number';
 export { formatDate } from './date';
 export {
   QUANTITY_KINDS,

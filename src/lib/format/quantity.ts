@@ -126,3 +126,34 @@ export function siUnitOfDisplay(kind: DisplayKind): string {
   };
   return units[kind];
 }
+
+const ENGINEERING: Partial<Record<DisplayKind, Array<{ unit: string; factor: number }>>> = {
+  frequency: [{ unit: 'Hz', factor: 1 }, { unit: 'kHz', factor: 1e-3 }, { unit: 'MHz', factor: 1e-6 }],
+  inductance: [{ unit: 'µH', factor: 1e6 }, { unit: 'mH', factor: 1e3 }, { unit: 'H', factor: 1 }],
+  capacitance: [{ unit: 'pF', factor: 1e12 }, { unit: 'nF', factor: 1e9 }, { unit: 'µF', factor: 1e6 }],
+  time: [{ unit: 'ns', factor: 1e9 }, { unit: 'µs', factor: 1e6 }, { unit: 'ms', factor: 1e3 }, { unit: 's', factor: 1 }],
+  voltage: [{ unit: 'V', factor: 1 }, { unit: 'kV', factor: 1e-3 }, { unit: 'MV', factor: 1e-6 }],
+  current: [{ unit: 'mA', factor: 1e3 }, { unit: 'A', factor: 1 }],
+  energy: [{ unit: 'mJ', factor: 1e3 }, { unit: 'J', factor: 1 }, { unit: 'kJ', factor: 1e-3 }],
+};
+
+/**
+ * The axis unit for a whole series picked by the size of its values, so ticks read in engineering units
+ * (a 240–720 m wire run in metres, not "240000–720000 mm"; a 1.2 MHz series in MHz): the largest unit in
+ * which the series' largest value is at least 1. Lengths: mm below a metre, m, km; in below 10 ft, ft.
+ */
+export function scaledAxisUnit(kind: DisplayKind, system: UnitSystem, values: ReadonlyArray<number | null | undefined>): { unit: string; factor: number } {
+  const finite = values.filter((v): v is number => typeof v === 'number' && Number.isFinite(v));
+  const size = finite.length ? Math.max(...finite.map(Math.abs)) : 0;
+  if (kind === 'length' || kind === 'wireLength') {
+    if (system === 'imperial') return size >= 120 * METRES_PER_INCH ? { unit: 'ft', factor: 1 / (12 * METRES_PER_INCH) } : { unit: 'in', factor: 1 / METRES_PER_INCH };
+    if (size >= 1000) return { unit: 'km', factor: 1e-3 };
+    if (size >= 1) return { unit: 'm', factor: 1 };
+    return { unit: 'mm', factor: 1e3 };
+  }
+  const scale = ENGINEERING[kind];
+  if (!scale || size === 0) return axisUnit(kind, system);
+  let pick = scale[0];
+  for (const s of scale) if (size * s.factor >= 1) pick = s;
+  return pick;
+}

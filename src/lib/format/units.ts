@@ -4,6 +4,7 @@
  * wrong dimensions) goes to mathjs in `units-mathjs.ts`, which gives the same value for the plain forms.
  */
 import { METRES_PER_FOOT, METRES_PER_INCH } from './length';
+import { canonicalNumberText, readLeadingNumber, readNumberText } from './read-number';
 
 export type QuantityKind = 'length' | 'capacitance' | 'inductance' | 'voltage' | 'current' | 'frequency' | 'angle' | 'time';
 
@@ -12,17 +13,19 @@ interface KindInfo {
   noun: string;
   siUnit: string;
   examples: string;
+  /** the unit put after a bare number in the message that asks for one */
+  exampleUnit: string;
 }
 
 export const QUANTITY_KINDS: Record<QuantityKind, KindInfo> = {
-  length: { noun: 'a length', siUnit: 'm', examples: '"4 in" or "0.1 m"' },
-  capacitance: { noun: 'a capacitance', siUnit: 'F', examples: '"20 nF" or "4 pF"' },
-  inductance: { noun: 'an inductance', siUnit: 'H', examples: '"50 uH" or "25 mH"' },
-  voltage: { noun: 'a voltage', siUnit: 'V', examples: '"12 kV" or "340 V"' },
-  current: { noun: 'a current', siUnit: 'A', examples: '"30 mA" or "1 A"' },
-  frequency: { noun: 'a frequency', siUnit: 'Hz', examples: '"60 Hz" or "120 Hz"' },
-  angle: { noun: 'an angle', siUnit: 'rad', examples: '"30 deg" or "0.5 rad"' },
-  time: { noun: 'a time', siUnit: 's', examples: '"150 us" or "2 ms"' },
+  length: { noun: 'a length', siUnit: 'm', examples: '"4 in" or "0.1 m"', exampleUnit: 'mm' },
+  capacitance: { noun: 'a capacitance', siUnit: 'F', examples: '"20 nF" or "4 pF"', exampleUnit: 'nF' },
+  inductance: { noun: 'an inductance', siUnit: 'H', examples: '"50 uH" or "25 mH"', exampleUnit: 'uH' },
+  voltage: { noun: 'a voltage', siUnit: 'V', examples: '"12 kV" or "340 V"', exampleUnit: 'kV' },
+  current: { noun: 'a current', siUnit: 'A', examples: '"30 mA" or "1 A"', exampleUnit: 'mA' },
+  frequency: { noun: 'a frequency', siUnit: 'Hz', examples: '"60 Hz" or "120 Hz"', exampleUnit: 'Hz' },
+  angle: { noun: 'an angle', siUnit: 'rad', examples: '"30 deg" or "0.5 rad"', exampleUnit: 'deg' },
+  time: { noun: 'a time', siUnit: 's', examples: '"150 us" or "2 ms"', exampleUnit: 'us' },
 };
 
 export type QuantityParse = { ok: true; value: number } | { ok: false; message: string };
@@ -72,11 +75,13 @@ export const SIMPLE_UNITS: ReadonlyMap<string, SimpleUnit> = new Map<string, Sim
 
 const NUMBER = String.raw`-?(?:\d+\.?\d*|\.\d+)(?:[eE][-+]?\d+)?`;
 const SIMPLE = new RegExp(String.raw`^(${NUMBER}) ?([A-Za-z]+)$`);
-const BARE_NUMBER = /^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i;
 
-/** Normalises what people type: µ/μ for micro, Ω for ohm, a comma decimal point, stray spaces. */
+/**
+ * Normalises what people type: µ/μ for micro, Ω for ohm, the leading number by the one number rule
+ * (`read-number.ts`: grouping and a decimal comma), stray spaces.
+ */
 export function normaliseQuantityText(text: string): string {
-  return text.trim().replace(/[µμ]/g, 'u').replace(/Ω/g, 'ohm').replace(/^(-?\d+),(\d+)/, '$1.$2').replace(/\s+/g, ' ');
+  return canonicalNumberText(text.trim().replace(/[µμ]/g, 'u').replace(/Ω/g, 'ohm')).replace(/\s+/g, ' ');
 }
 
 /** A plain form ("12 mm", "4.5 in", "20 nF") read into SI with its unit; null for anything else. */
@@ -99,10 +104,12 @@ export function parseQuantityQuick(input: number | string, kind: QuantityKind): 
   if (typeof input === 'number') {
     return Number.isFinite(input) ? { ok: true, value: input } : { ok: false, message: `${expected}, got a number that is not finite` };
   }
+  const lead = readLeadingNumber(input);
+  if (lead && !lead.read.ok) return { ok: false, message: `${expected}; ${lead.read.message}` };
   const text = normaliseQuantityText(input);
   if (text === '') return { ok: false, message: `${expected}, got an empty text` };
-  if (BARE_NUMBER.test(text)) {
-    return { ok: false, message: `${expected}, got a number without a unit (write "${text} ${info.siUnit}" or give a plain number in ${info.siUnit})` };
+  if (readNumberText(text)?.ok) {
+    return { ok: false, message: `${expected}, got a number without a unit; a bare number is read in no unit, so write it with one, e.g. "${text} ${info.exampleUnit}"` };
   }
   const simple = readSimpleQuantity(text);
   if (simple && simple.unit.kind === kind) return { ok: true, value: simple.value };

@@ -1,6 +1,9 @@
 import { DESIGN_PARTS } from '../design/registry';
 import type { Result } from '../../solver/types';
-import { figureValue, keyFigures, LIBRARY_DIGITS, showFigure } from './figures';
+import { figureValue, LIBRARY_DIGITS, showFigure } from './figures';
+import { resultFigure, type ResultFigureId } from '../design/figures';
+import { LEAD_FIGURES, RESULT_GROUPS } from '../design/figure-groups';
+import { formatTurns } from '../format/number';
 import { flatten, formatInput, inputLabel } from './inputs';
 import { formatSi } from '../format/si';
 
@@ -13,6 +16,7 @@ export type SummaryInput = {
   result: unknown;
   measured: Measured[];
   url?: string | null;
+  calibrated?: CalibratedTap;
 };
 export type SummaryFormat = 'text' | 'markdown';
 
@@ -29,26 +33,43 @@ function typedResult(result: unknown): Partial<Result> | null {
 
 export type SummaryBlock = { title: string; rows: Array<[string, string]> };
 
-/** The summary's sections as label/value rows: inputs as given, predicted results, measured values. */
-export function summaryBlocks(s: Pick<SummaryInput, 'design' | 'result' | 'measured'>): SummaryBlock[] {
-  const flat = flatten(s.design);
+/** The tap for values adopted on the bench; shown as the answer, with the prediction beside it. */
+export type CalibratedTap = { tapTurns: number | null; targetFrequency: number } | null;
+
+function tapText(result: unknown, calibrated: CalibratedTap | undefined): string | null {
+  const f = resultFigure('tapTurns');
+  const predicted = figureValue(result, f);
+  if (calibrated) {
+    const cal = calibrated.tapTurns === null ? 'out of reach' : formatTurns(calibrated.tapTurns);
+    return `${cal} (from the bench measurement; predicted ${predicted === null ? 'out of reach' : formatTurns(predicted)})`;
+  }
+  if (predicted === null) return typedResult(result)?.tuning ? 'out of reach' : null;
+  return showFigure(f, predicted);
+}
+
+/**
+ * The summary's sections as label/value rows: the figures that decide the build, the result groups of
+ * `RESULT_GROUPS` (what to buy, to set, to expect when measuring, what can hurt), measured values, and the
+ * inputs as given by part.
+ */
+export function summaryBlocks(s: Pick<SummaryInput, 'design' | 'result' | 'measured' | 'calibrated'>): SummaryBlock[] {
   const out: SummaryBlock[] = [];
-  for (const { key, title } of DESIGN_PARTS) {
-    const rows: Array<[string, string]> = [];
-    for (const [path, value] of flat) {
-      if (path !== key && !path.startsWith(`${key}.`)) continue;
-      rows.push([inputLabel(path), value === null ? 'none' : formatInput(path, value)]);
+  const row = (key: ResultFigureId): Array<[string, string]> => {
+    const f = resultFigure(key);
+    if (key === 'tapTurns') {
+      const t = tapText(s.result, s.calibrated);
+      return t === null ? [] : [[f.label, t]];
     }
-    if (rows.length) out.push({ title, rows });
-  }
-  const results: Array<[string, string]> = [];
-  for (const f of keyFigures) {
     const v = figureValue(s.result, f);
-    if (v === null) continue;
-    results.push([f.label, showFigure(f, v)]);
+    return v === null ? [] : [[f.label, showFigure(f, v)]];
+  };
+  const lead = LEAD_FIGURES.flatMap(row);
+  if (lead.length === 0) out.push({ title: 'Decides the build', rows: [['Results', 'none: the design needs attention']] });
+  else out.push({ title: 'Decides the build', rows: lead });
+  for (const g of RESULT_GROUPS) {
+    const rows = g.figures.flatMap(row);
+    if (rows.length) out.push({ title: g.title, rows });
   }
-  if (typedResult(s.result)?.tuning?.inRange === false) results.push(['Tap', 'the primary cannot reach the target frequency']);
-  out.push({ title: 'Predicted (Coilwright)', rows: results.length ? results : [['Results', 'none: the design needs attention']] });
   if (s.measured.length) {
     out.push({
       title: 'Measured',
@@ -58,38 +79,55 @@ export function summaryBlocks(s: Pick<SummaryInput, 'design' | 'result' | 'measu
       ]),
     });
   }
+  const flat = flatten(s.design);
+  for (const { key, title } of DESIGN_PARTS) {
+    const rows: Array<[string, string]> = [];
+    for (const [path, value] of flat) {
+      if (path !== key && !path.startsWith(`${key}.`)) continue;
+      rows.push([inputLabel(path), value === null ? 'none' : formatInput(path, value)]);
+    }
+    if (rows.length) out.push({ title: `Input: ${title}`, rows });
+  }
   return out;
 }
 
 const caution =
   'Caution: the tank capacitor holds a charge that can kill, also after the supply is off; ground and discharge it before touching. Follow local electrical codes.';
 
-/** A spec block to paste into a forum post asking for review, as plain text or Markdown. */
+/** The one-line header: the design and the figures that decide the build. */
+export function keyFiguresLine(s: SummaryInput): string {
+  const r = s.result;
+  const parts: string[] = [];
+  const tap = tapText(r, s.calibrated);
+  if (tap !== null) parts.push(`tap ${tap}`);
+  for (const key of LEAD_FIGURES.filter((k) => k !== 'tapTurns')) {
+    const f = resultFigure(key);
+    const v = figureValue(r, f);
+    if (v !== null) parts.push(`${(f.short ?? f.label).toLowerCase()} ${showFigure(f, v)}`);
+  }
+  const head = `${s.name} (revision ${s.revision}, ${s.updatedAt.slice(0, 10)})`;
+  return parts.length ? `${head}: ${parts.join(' · ')}` : `${head}: no results, the design needs attention`;
+}
+
+const cell = (t: string) => t.replace(/\|/g, '\\|').replace(/\n/g, ' ');
+
+/**
+ * A spec block to paste into a forum post asking for review: a one-line header with the key figures, then one
+ * Markdown table grouped as the results panel is (group, figure, value). The text format is the same table
+ * without Markdown emphasis, so it reads in a plain-text box as well.
+ */
 export function designSummary(s: SummaryInput, format: SummaryFormat): string {
   const bs = summaryBlocks(s);
   const hasTank = typeof typedResult(s.result)?.tank?.capacitance === 'number';
-  const lines: string[] = [];
-  if (format === 'markdown') {
-    lines.push(`## ${s.name.replace(/([\\`*_#[\]])/g, '\\$1')}`, '', `Revision ${s.revision}, ${s.updatedAt.slice(0, 10)}`, '');
-    for (const b of bs) {
-      lines.push(`**${b.title}**`, '', '| | |', '|---|---|');
-      for (const [k, v] of b.rows) lines.push(`| ${k.replace(/\|/g, '\\|')} | ${v.replace(/\|/g, '\\|')} |`);
-      lines.push('');
-    }
-    if (hasTank) lines.push(`> ${caution}`, '');
-    if (s.url) lines.push(`[Open the design](${s.url})`, '');
-    lines.push('_Predictions from a lumped model; measured values win._');
-  } else {
-    lines.push(s.name, `Revision ${s.revision}, ${s.updatedAt.slice(0, 10)}`, '');
-    const width = Math.min(48, Math.max(...bs.flatMap((b) => b.rows.map(([k]) => k.length))));
-    for (const b of bs) {
-      lines.push(b.title.toUpperCase());
-      for (const [k, v] of b.rows) lines.push(`  ${k.padEnd(width)}  ${v}`);
-      lines.push('');
-    }
-    if (hasTank) lines.push(caution, '');
-    if (s.url) lines.push(s.url, '');
-    lines.push('Predictions from a lumped model; measured values win.');
+  const header = keyFiguresLine(s);
+  const lines: string[] = [format === 'markdown' ? `**${header.replace(/([\\`*_#[\]])/g, '\\$1')}**` : header, ''];
+  lines.push('| Group | Figure | Value |', '|---|---|---|');
+  for (const b of bs) {
+    b.rows.forEach(([k, v], i) => lines.push(`| ${i === 0 ? cell(b.title) : ''} | ${cell(k)} | ${cell(v)} |`));
   }
+  lines.push('');
+  if (hasTank) lines.push(format === 'markdown' ? `> ${caution}` : caution, '');
+  if (s.url) lines.push(format === 'markdown' ? `[Open the design](${s.url})` : s.url, '');
+  lines.push(format === 'markdown' ? '_Predictions from a lumped model; measured values win._' : 'Predictions from a lumped model; measured values win.');
   return lines.join('\n') + '\n';
 }

@@ -8,7 +8,14 @@ import type { createDesignBodySchema, DesignListItem, DesignRecord, ResultSummar
 import type { SessionUser } from '../session';
 import { ApiError } from '../http';
 import { authorize, type DesignRow } from './access';
-import { requireDesignField, resultSummary, solveStored } from './solve';
+import { requireDesignField, resultSummary, solvedRow, solveStored } from './solve';
+import { calibrationOf } from './measurements';
+import { readCalibration } from '../../lib/buildsheet/calibration';
+
+/** Whether a builder adopted any measured value on the bench for this design. */
+function hasCalibration(row: DesignRow): boolean {
+  return Object.keys(readCalibration(row.calibration)).length > 0;
+}
 import { deleteAttachmentsOf } from './attachments';
 
 /** My designs, those shared with me and those of my groups, most recently changed first. */
@@ -57,6 +64,7 @@ export async function listDesigns(u: SessionUser): Promise<DesignListItem[]> {
       tapTurns: summary?.tapTurns ?? null,
       groupId: row.groupId,
       groupName: row.groupId ? (groupNames.get(row.groupId) ?? null) : null,
+      calibratedTapTurns: hasCalibration(row) ? (calibrationOf(solvedRow(row)).calibrated?.tapTurns ?? null) : null,
     };
   });
 }

@@ -6,7 +6,8 @@ import type { SharedDesign, ShareLink, ShareListItem } from '../../lib/api/contr
 import type { SessionUser } from '../session';
 import { ApiError } from '../http';
 import { authorize, type DesignRow } from './access';
-import { solveStored } from './solve';
+import { solvedRow } from './solve';
+import { calibrationOf } from './measurements';
 
 export function newShareToken(): string {
   return randomBytes(24).toString('base64url'); // 192 bits
@@ -56,5 +57,6 @@ export async function sharedRow(token: string): Promise<DesignRow> {
 /** GET /api/v1/shared/:token, without sign-in. */
 export async function getShared(token: string): Promise<SharedDesign> {
   const row = await sharedRow(token);
-  return { name: row.name, design: row.design, revision: row.revision, updatedAt: row.updatedAt.toISOString(), result: solveStored(row.design) };
+  const solved = solvedRow(row);
+  return { name: row.name, design: row.design, revision: row.revision, updatedAt: row.updatedAt.toISOString(), result: solved.result, calibration: calibrationOf(solved) };
 }

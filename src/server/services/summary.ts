@@ -7,7 +7,8 @@ import { parseQuery } from '../http';
 import { designSummary, type Measured, type SummaryFormat } from '../../lib/library/summary';
 import { authorize } from './access';
 import { sharedRow } from './shares';
-import { solveStored } from './solve';
+import { solvedRow } from './solve';
+import { calibrationOf } from './measurements';
 
 /** The summary's format from a URL's query (text unless markdown is asked for); anything else is a 400 naming `format`. */
 export function parseSummaryFormat(url: URL): SummaryFormat {
@@ -35,13 +36,15 @@ async function measuredOf(designId: string, calibration: StoredCalibration | nul
 
 export async function summaryForDesign(u: SessionUser, designId: string, format: SummaryFormat): Promise<string> {
   const { row } = await authorize(designId, u, 'read');
+  const solved = solvedRow(row);
   return designSummary(
     {
       name: row.name,
       revision: row.revision,
       updatedAt: row.updatedAt.toISOString(),
       design: row.design,
-      result: solveStored(row.design),
+      result: solved.result,
+      calibrated: calibrationOf(solved).calibrated,
       measured: await measuredOf(row.id, row.calibration),
     },
     format,
@@ -50,13 +53,15 @@ export async function summaryForDesign(u: SessionUser, designId: string, format:
 
 export async function summaryForShared(token: string, format: SummaryFormat, origin: string): Promise<string> {
   const row = await sharedRow(token);
+  const solved = solvedRow(row);
   return designSummary(
     {
       name: row.name,
       revision: row.revision,
       updatedAt: row.updatedAt.toISOString(),
       design: row.design,
-      result: solveStored(row.design),
+      result: solved.result,
+      calibrated: calibrationOf(solved).calibrated,
       measured: await measuredOf(row.id, row.calibration),
       url: `${origin}/s/${token}`,
     },

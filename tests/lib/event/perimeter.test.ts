@@ -45,7 +45,6 @@ describe('parseSparkParam', () => {
       ['4 ft', 1.2192],
       ["4'", 1.2192],
       ['48 in', 1.2192],
-      ['0.9', 0.9],
     ];
     for (const [raw, metres] of cases) {
       const r = parseSparkParam(raw);
@@ -60,10 +59,13 @@ describe('parseSparkParam', () => {
   });
 
   it('parseSparkParam rejects bad input with a message naming the field', () => {
-    for (const raw of ['abc', '3 kg', '-1 m', '0 m', '1e9 m', 'NaN']) {
+    for (const raw of ['abc', '3 kg', '-1 m', '0 m', '1e9 m', 'NaN', '5']) {
       const r = parseSparkParam(raw);
       expect(r.ok, raw).toBe(false);
-      if (!r.ok) expect(r.message, raw).toMatch(/^spark:/);
+      if (!r.ok) expect(r.message, raw).toMatch(/^Longest arc:/);
     }
+    // a bare number is refused by the designer's own rule, not read as metres
+    const bare = parseSparkParam('5');
+    if (!bare.ok) expect(bare.message).toContain('a number alone is refused: give its unit');
   });
 });

@@ -1,7 +1,8 @@
 import type { ReactNode } from 'react';
 import { useFormContext, type FieldPath } from 'react-hook-form';
 import { findDesignField, type FieldSpec } from '~/lib/design/registry';
-import type { UnitSystem } from '~/lib/format';
+import { lengthsInSystem, type UnitSystem } from '~/lib/format';
+import { BARE_NUMBER_RULE, GROUPING_RULE } from '~/lib/design/registry';
 import type { FormValues } from './values';
 import { fieldId, useFieldFeedback } from './field-context';
 import { FieldWarnings } from './FieldWarnings';
@@ -20,9 +21,10 @@ type Props = {
 /** The form's hint for a registry field: its own, or for a length an example in the user's system. */
 export function registryHint(f: FieldSpec | undefined, system: UnitSystem = 'metric'): string | undefined {
   if (!f) return undefined;
-  if (f.hint) return f.hint;
-  if (f.example) return `A length with its unit, e.g. ${f.example[system]}`;
-  return undefined;
+  const rule = f.kind === 'count' ? GROUPING_RULE : f.kind === 'choice' || f.kind === 'gauge' || f.kind === 'ratio' ? '' : BARE_NUMBER_RULE;
+  const own = f.hint ? lengthsInSystem(f.hint, system) : f.example ? `A length with its unit, e.g. ${f.example[system]}` : undefined;
+  if (!own) return rule ? rule.charAt(0).toUpperCase() + rule.slice(1) : undefined;
+  return rule ? `${own}; ${rule}` : own;
 }
 
 /** A labelled text input bound to the form, with its error and the solver's warnings about it underneath. */
@@ -34,7 +36,8 @@ export function Field({ path, label: givenLabel, hint: givenHint, system, placeh
   const { register } = useFormContext<FormValues>();
   const { errorFor, readOnly } = useFieldFeedback();
   const id = fieldId(path);
-  const error = errorFor(path);
+  const rawError = errorFor(path);
+  const error = rawError ? lengthsInSystem(rawError, system ?? 'metric') : rawError;
   const hintId = hint ? `${id}-hint` : undefined;
   const errorId = error ? `${id}-error` : undefined;
   const warnId = `${id}-warn`;

@@ -1,6 +1,7 @@
 import type { DesignInput } from '~/lib/design';
 import { DESIGN_FIELDS, defaultText, pathsOfKind } from '~/lib/design/registry';
 import { lengthInputText, convertLengthText, type UnitSystem } from '~/lib/format';
+import { browserDecimalMark, canonicalNumberText, readNumberText } from '~/lib/format/read-number';
 
 type Fields = (typeof DESIGN_FIELDS)[number];
 type UnionToIntersection<U> = (U extends unknown ? (x: U) => void : never) extends (x: infer I) => void ? I : never;
@@ -165,17 +166,23 @@ export function fromDesignInput(d: DesignInput, name: string, system: UnitSystem
   return v;
 }
 
+/**
+ * A quantity's text as the schema and the saved design take it: its number read by the one number rule in
+ * the browser's locale and written plainly ("1,000 mm" → "1000 mm", "0,5 in" → "0.5 in").
+ */
+const qt = (s: string): string => canonicalNumberText(s.trim(), browserDecimalMark());
+
 /** Optional text: blank means "not given" (the schema's default applies). */
-const opt = (s: string): string | undefined => (s.trim() === '' ? undefined : s.trim());
+const opt = (s: string): string | undefined => (s.trim() === '' ? undefined : qt(s));
 
 /**
- * A number field as the schema wants it: a JS number when the text is a plain number, otherwise the
- * text itself so the schema's message ("expected a whole number") names the problem.
+ * A number field as the schema wants it: a JS number when the text is a number by the one number rule
+ * ("1,000" → 1000), otherwise the text itself so the schema's message names the problem.
  */
 function num(s: string): number | string {
-  const t = s.trim().replace(/^(-?\d+),(\d+)$/, '$1.$2');
-  if (t !== '' && /^[-+]?(\d+\.?\d*|\.\d+)(e[-+]?\d+)?$/i.test(t)) return Number(t);
-  return t;
+  const t = s.trim();
+  const r = readNumberText(t, browserDecimalMark());
+  return r?.ok ? r.value : t;
 }
 
 function withoutUndefined<T extends Record<string, unknown>>(o: T): T {
@@ -189,34 +196,34 @@ export function toDesignInput(v: FormValues): DesignInput {
   const wire =
     s.wireMode === 'awg'
       ? { awg: num(s.wire.awg), insulation: s.wire.insulation }
-      : { diameter: s.wire.diameter.trim(), insulatedDiameter: s.wire.insulatedDiameter.trim() };
+      : { diameter: qt(s.wire.diameter), insulatedDiameter: qt(s.wire.insulatedDiameter) };
   const t = v.topload;
   const topload =
     t.shape === 'toroid'
-      ? withoutUndefined({ shape: 'toroid' as const, majorDiameter: t.majorDiameter.trim(), minorDiameter: t.minorDiameter.trim(), elevation: opt(t.elevation) })
+      ? withoutUndefined({ shape: 'toroid' as const, majorDiameter: qt(t.majorDiameter), minorDiameter: qt(t.minorDiameter), elevation: opt(t.elevation) })
       : t.shape === 'sphere'
-        ? withoutUndefined({ shape: 'sphere' as const, diameter: t.diameter.trim(), elevation: opt(t.elevation) })
+        ? withoutUndefined({ shape: 'sphere' as const, diameter: qt(t.diameter), elevation: opt(t.elevation) })
         : null;
   const p = v.primary;
   const primary = p.enabled
     ? withoutUndefined({
         shape: p.shape,
-        innerDiameter: p.innerDiameter.trim(),
+        innerDiameter: qt(p.innerDiameter),
         turns: num(p.turns),
-        conductorDiameter: p.conductorDiameter.trim(),
-        spacing: p.spacing.trim(),
-        angle: p.shape === 'conical' ? p.angle.trim() : undefined,
+        conductorDiameter: qt(p.conductorDiameter),
+        spacing: qt(p.spacing),
+        angle: p.shape === 'conical' ? qt(p.angle) : undefined,
         elevation: opt(p.elevation),
       })
     : null;
   const k = v.tank;
   const tank =
     k.mode === 'single'
-      ? { capacitance: k.capacitance.trim() }
+      ? { capacitance: qt(k.capacitance) }
       : k.mode === 'bank'
         ? withoutUndefined({
-            unitCapacitance: k.unitCapacitance.trim(),
-            unitVoltage: k.unitVoltage.trim(),
+            unitCapacitance: qt(k.unitCapacitance),
+            unitVoltage: qt(k.unitVoltage),
             series: num(k.series),
             parallel: num(k.parallel),
             unitRmsCurrent: opt(k.unitRmsCurrent),
@@ -227,15 +234,15 @@ export function toDesignInput(v: FormValues): DesignInput {
     u.kind === 'transformer'
       ? withoutUndefined({
           kind: 'transformer' as const,
-          voltage: u.voltage.trim(),
-          current: u.current.trim(),
-          lineFrequency: u.lineFrequency.trim(),
+          voltage: qt(u.voltage),
+          current: qt(u.current),
+          lineFrequency: qt(u.lineFrequency),
           breakRate: opt(u.breakRate),
         })
       : u.kind === 'solid-state'
         ? withoutUndefined({
             kind: 'solid-state' as const,
-            busVoltage: u.busVoltage.trim(),
+            busVoltage: qt(u.busVoltage),
             topology: u.topology,
             bridge: u.bridge,
             onTime: opt(u.onTime),
@@ -262,7 +269,7 @@ export function toDesignInput(v: FormValues): DesignInput {
   const strikeRail = withoutUndefined({ diameter: opt(r.diameter), height: opt(r.height), conductorDiameter: opt(r.conductorDiameter) });
   const design = withoutUndefined({
     secondary: withoutUndefined({
-      formDiameter: s.formDiameter.trim(),
+      formDiameter: qt(s.formDiameter),
       turns: num(s.turns),
       wire,
       windingLength: opt(s.windingLength),
@@ -272,7 +279,7 @@ export function toDesignInput(v: FormValues): DesignInput {
     groundClearance: opt(v.groundClearance),
     topload,
     // a rail with any field given goes to the schema, which names a missing diameter
-    strikeRail: Object.keys(strikeRail).length ? { ...strikeRail, diameter: r.diameter.trim() } : undefined,
+    strikeRail: Object.keys(strikeRail).length ? { ...strikeRail, diameter: qt(r.diameter) } : undefined,
     primary,
     tank,
     supply,

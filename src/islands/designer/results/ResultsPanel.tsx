@@ -1,175 +1,79 @@
 import { memo } from 'react';
 import type { Result } from '~/solver';
-import { formatFixed, formatPercent, formatQuantity as q, MISSING, type UnitSystem } from '~/lib/format';
+import { formatPercent, formatQuantity as q, lengthsInSystem, MISSING, type UnitSystem } from '~/lib/format';
+import { fieldLabel } from '~/lib/design/labels';
 import { SafetyNote } from '~/components/SafetyNote';
+import type { DesignSI } from '~/solver';
+import { figureOf, resultFigure, type ResultFigureId } from '~/lib/design/figures';
+import { LEAD_FIGURES, RESULT_GROUPS, type ResultGroup } from '~/lib/design/figure-groups';
+import { DrivePanel } from './DrivePanel';
+import type { Calibration } from '~/lib/buildsheet/calibration';
 import { FigureRow, Group } from './Row';
+import { bandFigure, bandNote, FIGURE_DISPLAY } from './figure-display';
 import { TapCallout } from './TapCallout';
 import { FieldModelPanel } from './FieldModelPanel';
-import { DrivePanel } from './DrivePanel';
 
-type Props = { result: Result; system: UnitSystem; stale?: boolean };
+type Props = { result: Result; system: UnitSystem; stale?: boolean; calibration?: Calibration | null; design?: DesignSI | null };
 
-/** Every result of the solver, grouped the way a builder works through a coil. */
-export const ResultsPanel = memo(function ResultsPanel({ result: r, system, stale }: Props) {
+/** A figure's row when the result has it: its registry label, its value, and the note the panel gives it. */
+function GroupRow({ r, system, figure }: { r: Result; system: UnitSystem; figure: ResultFigureId }) {
+  const f = resultFigure(figure);
+  const d = FIGURE_DISPLAY[figure];
+  const raw = f.get(r);
+  const shown = d?.shown ? d.shown(r) : raw !== undefined && (figureOf(r, f) !== null || d?.value !== undefined);
+  if (!shown) return null;
+  const band = bandFigure(r) === figure ? bandNote(r) : null;
+  const own = d?.note?.(r, system);
+  const note = band || own ? <>{own}{own && band ? ' ' : null}{band}</> : undefined;
+  return <FigureRow result={r} system={system} figure={figure} value={d?.value?.(r, system)} note={note} strong={d?.strong} />;
+}
+
+/**
+ * Every result of the solver, led by the figures that decide the build and then grouped by what the builder
+ * does with them (`RESULT_GROUPS`): what to buy, what to set, what to expect when measuring, what can hurt.
+ */
+export const ResultsPanel = memo(function ResultsPanel({ result: r, system, stale, calibration, design }: Props) {
   const band = r.uncertainty?.loadedFrequency;
+  // a bridge-driven coil has no charged bank: its energy is per burst, in the drive panel
   const bridge = r.supply?.kind === 'solid-state';
-  const ratio = r.secondary && r.system ? r.secondary.resonantFrequency / r.system.quarterWaveFrequency : null;
+  const lead = LEAD_FIGURES.filter((k) => k !== 'tapTurns' && !(bridge && k === 'tankEnergy'));
   return (
-    <div className={`space-y-4 transition-opacity ${stale ? 'opacity-60' : ''}`} aria-busy={stale ? true : undefined}>
-      <TapCallout result={r} />
-
-      {r.secondary && (
-        <Group title="Secondary" id="res-secondary">
-          <dl>
-          <FigureRow result={r} system={system} figure="secondaryInductance" />
-          <FigureRow result={r} system={system} figure="selfCapacitance" />
-          <FigureRow result={r} system={system} figure="secondaryFrequency" />
-          <FigureRow result={r} system={system} figure="windingLength" />
-          <FigureRow result={r} system={system} figure="windingDiameter" />
-          <FigureRow result={r} system={system} figure="aspectRatio" value={`${formatFixed(r.secondary.aspectRatio, 2)} : 1`} />
-          <FigureRow result={r} system={system} figure="wireLength" />
-          <FigureRow result={r} system={system} figure="dcResistance" />
-          <FigureRow result={r} system={system} figure="wireMass" />
-          {r.secondary.q !== null && <FigureRow result={r} system={system} figure="secondaryQ" value={formatFixed(r.secondary.q, 0)} />}
-          </dl>
-        </Group>
-      )}
+    <div className={`space-y-4 transition-opacity ${stale ? 'opacity-60' : ''}`} aria-busy={stale ? true : undefined} data-testid="results-panel">
+      <TapCallout result={r} calibration={calibration ?? null} design={design ?? null} />
 
       {r.system && (
-        <Group title="Topload and system frequency" id="res-system">
+        <Group title="Decides the build" id="res-lead">
           <dl>
-          {r.topload && <FigureRow result={r} system={system} figure="toploadCapacitance" />}
-          <FigureRow result={r} system={system} figure="loadedFrequency"
-            strong
-            note={band && !r.tuning ? <>Likely between {q(band.low, 'frequency', { digits: 3 })} and {q(band.high, 'frequency', { digits: 3 })}{band.nominal !== r.system.resonantFrequency ? ' with the streamer allowance' : ''}: the models' stated accuracy.</> : undefined}
-          />
-          <FigureRow result={r} system={system} figure="totalCapacitance" />
-          <FigureRow result={r} system={system} figure="quarterWaveFrequency"
-            note={
-              <>
-                For comparison only: a wound coil resonates well above the straight-wire quarter wave
-                {ratio !== null ? <> (here {formatFixed(ratio, 2)}× for the bare coil)</> : null}, because winding the wire into a solenoid changes the wave speed along it.
-              </>
-            }
-          />
+            {lead.map((k) => (
+              <GroupRow key={k} r={r} system={system} figure={k} />
+            ))}
           </dl>
         </Group>
       )}
+
+      {RESULT_GROUPS.map((g) => (
+        <ResultGroupSection key={g.key} group={g} r={r} system={system} />
+      ))}
+
+      {bridge && <DrivePanel result={r} system={system} />}
 
       <FieldModelPanel result={r} system={system} />
 
-      {(r.primary || r.tuning) && (
-        <Group title="Primary and tap" id="res-primary">
-          <dl>
-          {r.tuning && (
-            <>
-              <FigureRow
-                result={r}
-                system={system}
-                figure="targetFrequency"
-                note={band ? <>Likely between {q(band.low, 'frequency', { digits: 3 })} and {q(band.high, 'frequency', { digits: 3 })}: the models' stated accuracy.</> : undefined}
-              />
-              <FigureRow result={r} system={system} figure="tapTurns" value={r.tuning.tapTurns === null ? 'out of reach' : formatFixed(r.tuning.tapTurns, 2)} />
-              <FigureRow result={r} system={system} figure="primaryFrequencyAllTurns" />
-              <FigureRow result={r} system={system} figure="requiredInductance" />
-            </>
-          )}
-          {r.primary && (
-            <>
-              <FigureRow result={r} system={system} figure="primaryInductance" />
-              {r.primary.inductanceAtTap !== null && <FigureRow result={r} system={system} figure="primaryInductanceAtTap" />}
-              <FigureRow result={r} system={system} figure="conductorLength" />
-              {r.primary.conductorLengthAtTap !== null && <FigureRow result={r} system={system} figure="conductorLengthAtTap" />}
-              <FigureRow result={r} system={system} figure="primaryOuterDiameter" />
-            </>
-          )}
-          </dl>
-        </Group>
+      {!bridge && r.tank && r.tank.energyAtSupplyPeak !== null && (
+        <SafetyNote kind="stored-energy" className="mt-2">
+          <p className="mt-1" data-safety-figure="stored-energy">
+            This bank holds ½CV² = <strong>{q(r.tank.energyAtSupplyPeak, 'energy')}</strong> at the supply peak: potentially lethal.
+          </p>
+        </SafetyNote>
       )}
-
-      {r.coupling && (
-        <Group title="Coupling" id="res-coupling">
-          <dl>
-          <FigureRow result={r} system={system} figure="k" strong value={formatFixed(r.coupling.k, 3)} />
-          {r.coupling.kAtTap !== null && <FigureRow result={r} system={system} figure="kAtTap" value={formatFixed(r.coupling.kAtTap, 3)} />}
-          <FigureRow result={r} system={system} figure="mutualInductance" />
-          {r.coupling.elevationForTargetCoupling !== null && (
-            <FigureRow result={r} system={system} figure="elevationForTargetCoupling" />
-          )}
-          {r.response && (
-            <>
-              <FigureRow result={r} system={system} figure="fLow" />
-              <FigureRow result={r} system={system} figure="fHigh" />
-              <FigureRow result={r} system={system} figure="transferTime"
-                value={q(r.response.firstPrimaryMinimum ?? r.response.transferTime, 'time')}
-                note={<>About {formatFixed(r.response.halfCyclesToTransfer, 1)} half-cycles; lossless estimate.</>}
-              />
-            </>
-          )}
-          </dl>
-        </Group>
+      {r.supply && !bridge && (
+        <SafetyNote kind="supply" className="mt-2">
+          <p className="mt-1" data-safety-figure="supply">
+            This supply peaks at <strong>{q(r.supply.peakVoltage, 'voltage')}</strong>
+            {r.supply.ratedPower !== null ? <> and can deliver {q(r.supply.ratedPower, 'power')}</> : null}.
+          </p>
+        </SafetyNote>
       )}
-
-      {(r.tank || r.supply) && (
-        <Group title="Tank and supply" id="res-tank">
-          {r.tank && (
-            <>
-              <dl>
-              <FigureRow result={r} system={system} figure="tankCapacitance" />
-              {r.tank.voltageRating !== null && <FigureRow result={r} system={system} figure="tankVoltageRating" />}
-              {r.tank.perUnitVoltage !== null && <FigureRow result={r} system={system} figure="perUnitVoltage" />}
-              {r.tank.ratingMargin !== null && <FigureRow result={r} system={system} figure="ratingMargin" value={`${formatFixed(r.tank.ratingMargin, 2)}×`} />}
-              {!bridge && (
-                <FigureRow result={r} system={system} figure="tankEnergy" strong value={r.tank.energyAtSupplyPeak === null ? 'add a supply' : q(r.tank.energyAtSupplyPeak, 'energy')} />
-              )}
-              {r.tank.bleeder && (
-                <FigureRow result={r} system={system} figure="bleeder"
-                  value={`${q(r.tank.bleeder.resistancePerUnit, 'resistance', { digits: 2 })}, ${q(r.tank.bleeder.powerPerUnit, 'power', { digits: 2 })}`}
-                  note={<>{r.tank.bleeder.count} resistors; the bank falls to about 1 % in {q(4.6 * r.tank.bleeder.timeConstant, 'time', { digits: 2 })}.</>}
-                />
-              )}
-              </dl>
-              {!bridge && (
-              <SafetyNote kind="stored-energy" className="mt-2">
-                {r.tank.energyAtSupplyPeak !== null && (
-                  <p className="mt-1" data-safety-figure="stored-energy">
-                    This bank holds ½CV² = <strong>{q(r.tank.energyAtSupplyPeak, 'energy')}</strong> at the supply peak: potentially lethal.
-                  </p>
-                )}
-              </SafetyNote>
-              )}
-            </>
-          )}
-          {r.supply && (
-            <div className="mt-3">
-              <dl>
-              <FigureRow result={r} system={system} figure="peakVoltage" />
-              {r.supply.ratedPower !== null && <FigureRow result={r} system={system} figure="ratedPower" />}
-              {r.supply.resonantCapacitance !== null && <FigureRow result={r} system={system} figure="resonantCapacitance" />}
-              {r.supply.ltrCapacitance !== null && <FigureRow result={r} system={system} figure="ltrCapacitance" />}
-              {r.supply.tankToResonantRatio !== null && <FigureRow result={r} system={system} figure="tankToResonantRatio" value={`${formatFixed(r.supply.tankToResonantRatio, 2)}×`} />}
-              {r.supply.energyPerBang !== null && <FigureRow result={r} system={system} figure="energyPerBang" />}
-              {r.supply.powerAtBreakRate !== null && <FigureRow result={r} system={system} figure="powerAtBreakRate" />}
-              {r.supply.sparkLengthEstimate !== null && (
-                <FigureRow result={r} system={system} figure="sparkLengthEstimate"
-                  note={r.supply.sparkLengthNote ?? undefined}
-                />
-              )}
-              </dl>
-              {!bridge && (
-                <SafetyNote kind="supply" className="mt-2">
-                  <p className="mt-1" data-safety-figure="supply">
-                    This supply peaks at <strong>{q(r.supply.peakVoltage, 'voltage')}</strong>
-                    {r.supply.ratedPower !== null ? <> and can deliver {q(r.supply.ratedPower, 'power')}</> : null}.
-                  </p>
-                </SafetyNote>
-              )}
-            </div>
-          )}
-        </Group>
-      )}
-
-      {bridge && <DrivePanel result={r} system={system} />}
 
       {r.warnings.length > 0 && (
         <section className="cw-card" aria-labelledby="res-warnings">
@@ -179,7 +83,7 @@ export const ResultsPanel = memo(function ResultsPanel({ result: r, system, stal
           <ul className="list-disc space-y-1 pl-5 text-sm">
             {r.warnings.map((w) => (
               <li key={`${w.code}-${w.path}-${w.message}`}>
-                <a href={`#${anchorFor(w.path)}`}>{w.path || 'design'}</a>: {w.message}
+                <a href={`#${anchorFor(w.path)}`}>{fieldLabel(w.path)}</a>: {lengthsInSystem(w.message, system)}
               </li>
             ))}
           </ul>
@@ -190,6 +94,20 @@ export const ResultsPanel = memo(function ResultsPanel({ result: r, system, stal
     </div>
   );
 });
+
+function ResultGroupSection({ group, r, system }: { group: ResultGroup; r: Result; system: UnitSystem }) {
+  const rows = group.figures.map((k) => <GroupRow key={k} r={r} system={system} figure={k} />);
+  const id = `res-${group.key}`;
+  return (
+    <section className="cw-card" aria-labelledby={id} data-result-group={group.key}>
+      <h3 id={id} className="text-base font-semibold">
+        {group.title}
+      </h3>
+      <p className="mb-2 text-xs text-ink-soft">{group.purpose}</p>
+      <dl>{rows}</dl>
+    </section>
+  );
+}
 
 /** The input a warning's path points at, or its part when the field is not on screen. */
 function anchorFor(path: string): string {

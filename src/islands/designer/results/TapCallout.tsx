@@ -1,8 +1,15 @@
-import type { Result } from '~/solver';
+import type { DesignSI, Result } from '~/solver';
 import { formatFixed, formatQuantity as q } from '~/lib/format';
+import { calibratedTuning, type Calibration } from '~/lib/buildsheet/calibration';
 
-/** The one number to set on the bench: where to put the tap, and how far either side to search. */
-export function TapCallout({ result: r }: { result: Result }) {
+type Props = { result: Result; calibration?: Calibration | null; design?: DesignSI | null };
+
+/**
+ * The one number to set on the bench: where to put the tap, and how far either side to search. Once a
+ * measured frequency or tank capacitance is adopted on the bench, the calibrated tap is the answer and the
+ * prediction stands beside it.
+ */
+export function TapCallout({ result: r, calibration, design }: Props) {
   const t = r.tuning;
   const band = r.uncertainty?.loadedFrequency;
   const taps = r.uncertainty?.tapTurns;
@@ -16,6 +23,30 @@ export function TapCallout({ result: r }: { result: Result }) {
       </section>
     );
   }
+  const cal = calibration && design ? calibratedTuning(design, r, calibration) : null;
+  if (cal) {
+    return (
+      <section className="rounded-xl border-2 border-copper bg-panel p-4" aria-labelledby="tap-title" data-testid="tap-callout" data-calibrated="true">
+        <h3 id="tap-title" className="text-sm font-semibold uppercase tracking-wide text-copper">
+          Set the tap at (from your measurement)
+        </h3>
+        {cal.tapTurns !== null ? (
+          <p className="mt-1 text-4xl font-bold tabular-nums" data-result="tap">
+            {formatFixed(cal.tapTurns, 2)} <span className="text-xl font-semibold">turns</span>
+          </p>
+        ) : (
+          <p className="mt-1 text-lg font-semibold text-fault" data-result="tap">
+            The primary cannot reach {q(cal.targetFrequency, 'frequency')} with this tank capacitor.
+          </p>
+        )}
+        <p className="mt-1 text-sm">counted from the inner end of the primary, to tune it to {q(cal.targetFrequency, 'frequency')} from the values adopted on the bench.</p>
+        <p className="mt-2 text-sm text-ink-soft" data-result="tap-predicted">
+          Predicted before measuring: {t.tapTurns === null ? 'out of reach' : `${formatFixed(t.tapTurns, 2)} turns`} for {q(t.targetFrequency, 'frequency')}.
+        </p>
+      </section>
+    );
+  }
+  const streamer = r.system ? t.targetFrequency !== r.system.resonantFrequency : false;
   return (
     <section className="rounded-xl border-2 border-copper bg-panel p-4" aria-labelledby="tap-title" data-testid="tap-callout">
       <h3 id="tap-title" className="text-sm font-semibold uppercase tracking-wide text-copper">
@@ -32,7 +63,7 @@ export function TapCallout({ result: r }: { result: Result }) {
               Search from <strong>{formatFixed(Math.min(taps.low, taps.high), 2)}</strong> to <strong>{formatFixed(Math.max(taps.low, taps.high), 2)}</strong> turns at low power
               {band ? (
                 <>
-                  , since the secondary is likely to land between {q(band.low, 'frequency', { digits: 3 })} and {q(band.high, 'frequency', { digits: 3 })}
+                  , since the {streamer ? 'streamer-loaded resonance' : 'secondary'} is likely to land between {q(band.low, 'frequency', { digits: 3 })} and {q(band.high, 'frequency', { digits: 3 })}
                 </>
               ) : null}
               .

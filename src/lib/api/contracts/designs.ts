@@ -39,6 +39,8 @@ export const designListItemSchema = z.object({
   /** the design's group and its name, or null */
   groupId: z.string().nullable(),
   groupName: z.string().nullable(),
+  /** the tap for the values adopted on the bench; null when none were adopted */
+  calibratedTapTurns: z.number().nullable().optional(),
 });
 
 export const designListResponseSchema = z.object({ designs: z.array(designListItemSchema) });

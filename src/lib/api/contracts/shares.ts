@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { resultSchema, storedDesignSchema, timestampSchema } from './common';
+import { calibrationResponseSchema } from './measurements';
 
 /** POST /api/v1/designs/:id/share → 201 */
 export const shareLinkSchema = z.object({ token: z.string(), url: z.string() });
@@ -16,6 +17,8 @@ export const sharedDesignSchema = z.object({
   revision: z.number().int().min(1),
   updatedAt: timestampSchema,
   result: resultSchema.nullable(),
+  /** values adopted on the bench, with the calibrated tap they give */
+  calibration: calibrationResponseSchema.optional(),
 });
 
 export type ShareLink = z.infer<typeof shareLinkSchema>;
