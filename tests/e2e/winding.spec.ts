@@ -61,6 +61,9 @@ test('a winding session at 40 rpm catches a counter missing counts, keeps a read
   // pause for a splice: the winding time stands still, then runs again after resuming
   await page.getByRole('button', { name: 'Pause: splice' }).click();
   await expect(page.getByTestId('paused')).toContainText('Paused: Splice');
+  // once the server has the pause, its start is fixed: from then on the winding time stands still
+  await expect(page.getByTestId('live-session')).toHaveAttribute('data-status', 'paused');
+  await page.clock.fastForward('00:05');
   const before = await page.getByTestId('fig-elapsed').innerText();
   await page.clock.fastForward('03:00');
   await expect(page.getByTestId('fig-elapsed')).toHaveText(before);

@@ -67,3 +67,29 @@ export type ResultGroupKey = (typeof RESULT_GROUPS)[number]['key'];
  * wire figure is a comparison, explained on the methods page and given in the build sheet's wire section.
  */
 export const UNGROUPED_FIGURES: readonly ResultFigureId[] = ['quarterWaveFrequency'];
+
+/**
+ * The figures of a bridge-driven coil, shown together in the drive panel (they exist only for a solid-state
+ * supply): what the switches, the bank and the bus go through in a burst.
+ */
+export const DRIVE_FIGURES: readonly ResultFigureId[] = [
+  'surgeImpedance',
+  'drivePrimaryFrequency',
+  'driveFrequencyRatio',
+  'peakPrimaryCurrent',
+  'timeToCurrentLimit',
+  'capacitorPeakVoltage',
+  'capacitorRmsCurrent',
+  'capacitorPeakEnergy',
+  'unitPeakVoltage',
+  'unitVoltageMargin',
+  'stringRmsCurrent',
+  'unitCurrentMargin',
+  'secondaryPeakVoltage',
+  'baseCurrentPeak',
+  'burstEnergy',
+  'averagePower',
+  'dutyCycle',
+  'busDroop',
+  'busEnergy',
+];

@@ -18,8 +18,25 @@ function localPath(url: string): string | null {
 export function openDb(url: string, authToken?: string): Db {
   const path = localPath(url);
   if (path) mkdirSync(dirname(resolve(path)), { recursive: true });
-  const client = createClient({ url, authToken });
-  return drizzle(client, { schema }) as Db;
+  const client = createClient({ url, authToken, ...(path ? { timeout: 5000 } : {}) });
+  const db = drizzle(client, { schema }) as Db;
+  if (path) serializeTransactions(db);
+  return db;
+}
+
+/**
+ * A transaction on a local file takes a pooled connection of its own, and SQLite lets one writer at a time:
+ * a second BEGIN from this process while one is open fails at once with SQLITE_BUSY. Transactions of one
+ * process therefore run one after another (each still atomic); reads outside transactions go on meanwhile.
+ */
+function serializeTransactions(db: Db): void {
+  const begin = db.transaction.bind(db);
+  let tail: Promise<unknown> = Promise.resolve();
+  db.transaction = ((fn: Parameters<typeof begin>[0], config?: Parameters<typeof begin>[1]) => {
+    const run = tail.then(() => begin(fn, config));
+    tail = run.catch(() => undefined);
+    return run;
+  }) as typeof db.transaction;
 }
 
 /** WAL and foreign keys for local databases, then the committed migrations in drizzle/. */
