@@ -53,6 +53,9 @@ describe('invitations', () => {
     const refused = await forwarded.c.post(`/api/v1/invitations/${token}/accept`);
     expect(refused.status).toBe(403);
     expect((await refused.json()).error.message).toContain('another e-mail address');
+    const pageForOther = await (await forwarded.c.get(`/invitations/${token}`)).text();
+    expect(pageForOther).toContain('only that address can accept it');
+    expect(pageForOther).not.toContain('AcceptInvitation');
     expect((await forwarded.c.get(`/api/v1/designs/${id}`)).status).toBe(404);
 
     const newcomer = new Client(s.url);
