@@ -26,7 +26,7 @@ export default defineConfig({
     },
   },
   webServer: {
-    command: 'node node_modules/tsx/dist/cli.mjs scripts/start.ts',
+    command: 'node scripts/start.mjs',
     url: `${baseURL}/`,
     timeout: 120_000,
     reuseExistingServer: false,

@@ -9,7 +9,7 @@ import { pathToFileURL } from 'node:url';
 import { startFakeMail } from './dev/fake-mail';
 import { startFakeS3 } from './dev/fake-s3';
 
-const root = resolve(import.meta.dirname, '..');
+const root = process.env.COILWRIGHT_ROOT || resolve(import.meta.dirname, '..');
 process.chdir(root);
 process.env.ASTRO_TELEMETRY_DISABLED = '1';
 process.env.HOST ||= '127.0.0.1';
@@ -80,26 +80,35 @@ async function main() {
 
   const { env } = await import('../src/server/env');
   const { frontHandler, listen } = await import('./serve/front');
-  const entry = (await import(pathToFileURL(join(distDir, 'server/entry.mjs')).href)) as {
-    handler: Parameters<typeof frontHandler>[0];
-    pageMap?: Map<string, () => Promise<unknown>>;
-  };
-  // The adapter imports a route's module on every request; under the TypeScript loader each import() is a
-  // round trip to the loader's thread. Each module is loaded once, so keep the first promise.
+  // The adapter imports a route's module, the actions module and the middleware with import() on every
+  // request; each is loaded once, so keep the first promise. The entry puts the actions and middleware
+  // loaders on the shared manifest object (Object.assign) and the adapter's pipeline copies them when the
+  // entry is evaluated, so they are wrapped by setters placed on the manifest before the entry loads.
   const once = (load: () => Promise<unknown>) => {
     let loaded: Promise<unknown> | undefined;
     return () => (loaded ??= load());
   };
-  for (const [route, load] of entry.pageMap ?? []) entry.pageMap!.set(route, once(load));
-  // The same for the actions and middleware loaders the entry put on its manifest (one module, shared).
   const manifestFile = readdirSync(join(distDir, 'server')).find((f) => /^manifest_.*\.mjs$/.test(f));
   if (manifestFile) {
     const { manifest } = (await import(pathToFileURL(join(distDir, 'server', manifestFile)).href)) as { manifest?: Record<string, unknown> };
     for (const key of ['actions', 'middleware'] as const) {
-      const load = manifest?.[key];
-      if (typeof load === 'function') manifest![key] = once(load as () => Promise<unknown>);
+      if (!manifest) break;
+      let value: unknown = manifest[key];
+      Object.defineProperty(manifest, key, {
+        configurable: true,
+        enumerable: true,
+        get: () => value,
+        set: (v: unknown) => {
+          value = typeof v === 'function' ? once(v as () => Promise<unknown>) : v;
+        },
+      });
     }
   }
+  const entry = (await import(pathToFileURL(join(distDir, 'server/entry.mjs')).href)) as {
+    handler: Parameters<typeof frontHandler>[0];
+    pageMap?: Map<string, () => Promise<unknown>>;
+  };
+  for (const [route, load] of entry.pageMap ?? []) entry.pageMap!.set(route, once(load));
   await listen(frontHandler(entry.handler, join(distDir, 'client'), env().TRUSTED_PROXIES), env().HOST, env().PORT);
   console.log(`[start] Coilwright is serving on http://${process.env.HOST}:${process.env.PORT}`);
 }

@@ -6,5 +6,7 @@ declare namespace App {
     session: { id: string; expiresAt: Date } | null;
     /** Headers of the rate limit that applied to this request, added to the response by the middleware. */
     rateLimit?: Record<string, string>;
+    /** Set by a page whose HTML may be kept in the render cache under this key (see server/render-cache). */
+    renderKey?: string;
   }
 }

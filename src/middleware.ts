@@ -9,6 +9,7 @@ import { checkSameOrigin } from './server/security/origin';
 import { finishResponse } from './server/security/respond';
 import { cachedPage, hasSessionCookie, keepPage, sharedPageKey } from './server/security/page-cache';
 import { HTTPS_HEADER } from './server/security/forwarded';
+import { keepRender } from './server/render-cache';
 
 let origins: ReadonlySet<string> | undefined;
 
@@ -67,6 +68,7 @@ export const onRequest = defineMiddleware(async (context, next) => {
     }
   }
   let response = await next();
+  if (context.locals.renderKey) response = await keepRender(context.locals.renderKey, response);
   // A path under /api/ that matches no endpoint gets the contract's JSON error, not the HTML 404 page.
   if (response.status === 404 && url.pathname.startsWith('/api/') && (response.headers.get('content-type') ?? '').startsWith('text/html')) {
     response = errorResponse('not_found', 'There is no such API endpoint.');

@@ -12,6 +12,6 @@ const r = await c.post('/api/v1/designs', { name: 'Profiled coil', design: examp
 const { id } = (await r.json()) as { id: string };
 const cookie = [...c.cookies].map(([k, v]) => `${k}=${v}`).join('; ');
 const url = path === 'api' ? `${app.url}/api/v1/designs/${id}` : `${app.url}/designs/${id}`;
-const res = await autocannon({ url, connections: 10, duration: 8, headers: { cookie } });
+const res = await autocannon({ url, connections: 10, duration: Number(process.env.PROFILE_SECONDS || 8), headers: { cookie } });
 console.log('rps', res.requests.average, 'p99', res.latency.p99, 'non2xx', res.non2xx);
 await app.stop();

@@ -7,6 +7,8 @@ import { join, resolve } from 'node:path';
 export type TestServer = {
   url: string;
   dataDir: string;
+  /** the server process (for CPU figures in benches) */
+  pid: number;
   stop: () => Promise<void>;
   /** SIGKILL to the server and everything it started, as a power cut would; the data folder is kept. */
   kill: () => Promise<void>;
@@ -18,7 +20,7 @@ export type StartOptions = {
   dataDir?: string;
   /** Leave the data folder in place on stop. */
   keepData?: boolean;
-  /** Node.js flags for the server process itself (e.g. --cpu-prof when profiling a bench); tsx then loads in-process */
+  /** Node.js flags for the server process itself (e.g. --cpu-prof when profiling a bench) */
   nodeArgs?: string[];
 };
 
@@ -41,7 +43,7 @@ export async function startServer(extraEnv: Record<string, string> = {}, opts: S
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
   let log = '';
-  const child: ChildProcess = spawn(process.execPath, [...(opts.nodeArgs ? [...opts.nodeArgs, '--import', 'tsx'] : [join(root, 'node_modules/tsx/dist/cli.mjs')]), join(root, 'scripts/start.ts')], {
+  const child: ChildProcess = spawn(process.execPath, [...(opts.nodeArgs ?? []), join(root, 'scripts/start.mjs')], {
     cwd: root,
     env: {
       ...process.env,
@@ -78,6 +80,7 @@ export async function startServer(extraEnv: Record<string, string> = {}, opts: S
   return {
     url,
     dataDir,
+    pid: child.pid!,
     output: () => log,
     kill: async () => {
       if (child.exitCode !== null || child.signalCode !== null) return;

@@ -33,15 +33,19 @@ function countingSolver() {
 
 let db: Db;
 
-/** Counts reads of a design row by id, the first step of every access check. */
+/** Counts reads of a design row by id (the first step of every access check), as statements reach the database. */
 function countDesignLookups() {
-  const table = db.query.designs;
-  const original = table.findFirst;
+  const client = db.$client;
+  const original = client.execute;
   let calls = 0;
-  table.findFirst = ((...args: Parameters<typeof original>) => (calls++, original.apply(table, args))) as typeof original;
+  client.execute = ((stmt: Parameters<typeof original>[0], ...rest: unknown[]) => {
+    const text = typeof stmt === 'string' ? stmt : (stmt as { sql: string }).sql;
+    if (/^select\b[\s\S]*\bfrom "designs"[\s\S]*\bwhere "designs"\."id" = \?/i.test(text)) calls++;
+    return (original as (...a: unknown[]) => ReturnType<typeof original>).call(client, stmt, ...rest);
+  }) as typeof original;
   return {
     stop: () => {
-      table.findFirst = original;
+      client.execute = original;
       return calls;
     },
   };

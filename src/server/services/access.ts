@@ -1,5 +1,6 @@
-import { and, eq } from 'drizzle-orm';
+import { and, eq, sql } from 'drizzle-orm';
 import { database } from './database';
+import type { Db } from '../db';
 import { designs, designMembers, groupMembers } from '../db/schema';
 import { designCan, designRoleOfGroupRole, strongerDesignRole, type DesignAction, type DesignRole, type GroupRole } from '../../lib/permissions';
 import type { SessionUser } from '../session';
@@ -16,6 +17,20 @@ export type DesignAccess = {
   via: 'direct' | 'group' | 'site';
 };
 
+/** The design lookup every authorization starts with, prepared once per database. */
+function designById(db: Db) {
+  let q = preparedDesignById.get(db);
+  if (!q) {
+    q = prepareDesignById(db);
+    preparedDesignById.set(db, q);
+  }
+  return q;
+}
+const preparedDesignById = new WeakMap<Db, ReturnType<typeof prepareDesignById>>();
+function prepareDesignById(db: Db) {
+  return db.query.designs.findFirst({ where: eq(designs.id, sql.placeholder('id')) }).prepare();
+}
+
 /**
  * The caller's role on a design: owner, a member role, the role their group role grants on a group's design (the
  * stronger of the two when both apply), or admin for site admins; null without one. Group membership is read on
@@ -23,7 +38,7 @@ export type DesignAccess = {
  */
 export async function roleOn(designId: string, u: SessionUser | null): Promise<DesignAccess | null> {
   const db = database();
-  const row = await db.query.designs.findFirst({ where: eq(designs.id, designId) });
+  const row = await designById(db).execute({ id: designId });
   if (!row || !u) return null;
   const g = row.groupId ? await db.query.groupMembers.findFirst({ where: and(eq(groupMembers.groupId, row.groupId), eq(groupMembers.userId, u.id)) }) : undefined;
   const groupRole = g?.role ?? null;

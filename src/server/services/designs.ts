@@ -91,10 +91,33 @@ export async function createDesign(u: SessionUser, body: z.output<typeof createD
   return { id, name, revision: 1, role: 'owner', design: parsed.input, result };
 }
 
-export async function getDesign(u: SessionUser | null, id: string): Promise<DesignRecord & { updatedAt: string }> {
-  const { row, role } = await authorize(id, u, 'read');
+function designRecordOf(row: DesignRow, role: DesignRole): DesignRecord & { updatedAt: string } {
   return { id: row.id, name: row.name, design: row.design, revision: row.revision, role, updatedAt: row.updatedAt.toISOString(), groupId: row.groupId, result: solveStored(row.design) };
 }
+
+export async function getDesign(u: SessionUser | null, id: string): Promise<DesignRecord & { updatedAt: string }> {
+  const { row, role } = await authorize(id, u, 'read');
+  return designRecordOf(row, role);
+}
+
+/**
+ * The body of GET /api/v1/designs/:id as JSON text. A design's content changes only with a new revision (a
+ * save writes the design and the next revision number in one statement), so the text is kept per revision,
+ * name, update time, group and the caller's role, and a read of the same revision sends the same bytes again.
+ */
+export async function getDesignJson(u: SessionUser | null, id: string): Promise<string> {
+  const { row, role } = await authorize(id, u, 'read');
+  const key = `${row.id}\u0000${row.revision}\u0000${row.updatedAt.getTime()}\u0000${row.name}\u0000${row.groupId ?? ''}\u0000${role}`;
+  let text = designTexts.get(key);
+  if (text === undefined) {
+    text = JSON.stringify(designRecordOf(row, role));
+    designTexts.set(key, text);
+    if (designTexts.size > 256) designTexts.delete(designTexts.keys().next().value as string);
+  }
+  return text;
+}
+
+const designTexts = new Map<string, string>();
 
 /** Saves a new revision; `revision` must be the latest, or nothing is written and the answer is 409 with the latest. */
 export async function updateDesign(u: SessionUser, id: string, body: z.output<typeof updateDesignBodySchema>): Promise<DesignRecord> {

@@ -21,10 +21,12 @@ export function solveInput(input: unknown): { input: DesignInput; result: Result
   return { input: parsed.input, result: solve(parsed.design) };
 }
 
-/** Solves a stored design; a design saved before a schema change still answers, with its result null. */
-export function solveStored(input: unknown): Result | null {
-  // The solver is deterministic: a stored design (saved once, read many times) is parsed and solved once per
-  // process; the 256 most recently read are kept. Callers only serialise the result, never change it.
+/**
+ * A stored design parsed and solved once per process. The solver is deterministic and a stored design is
+ * saved once and read many times, so the 256 most recently read are kept, keyed by their JSON. Callers only
+ * read or serialise what they get, never change it.
+ */
+function storedSolution(input: unknown): { parsed: ParseDesignResult; result: Result | null } {
   const key = JSON.stringify(input);
   const hit = storedResults.get(key);
   if (hit !== undefined) {
@@ -33,13 +35,18 @@ export function solveStored(input: unknown): Result | null {
     return hit;
   }
   const parsed = parseDesign(input);
-  const result = parsed.ok ? solve(parsed.design) : null;
-  storedResults.set(key, result);
+  const solution = { parsed, result: parsed.ok ? solve(parsed.design) : null };
+  storedResults.set(key, solution);
   if (storedResults.size > 256) storedResults.delete(storedResults.keys().next().value as string);
-  return result;
+  return solution;
 }
 
-const storedResults = new Map<string, Result | null>();
+const storedResults = new Map<string, { parsed: ParseDesignResult; result: Result | null }>();
+
+/** Solves a stored design; a design saved before a schema change still answers, with its result null. */
+export function solveStored(input: unknown): Result | null {
+  return storedSolution(input).result;
+}
 
 /** The key figures stored with each revision. */
 export function resultSummary(result: Result | null): ResultSummary | null {
@@ -65,8 +72,16 @@ export type SolvedDesign = {
   readonly result: Result | null;
 };
 
-/** Parses a stored design row; the solver runs at most once, when `result` is first read. */
-export function solvedRow(row: { id: string; design: unknown; calibration: unknown }, solver: (d: DesignSI) => Result = solve): SolvedDesign {
+/**
+ * Parses a stored design row; the solver runs at most once, when `result` is first read. With the real solver
+ * the parse and the result come from the process-wide memo of stored designs (the same design read again is
+ * not solved again); a solver passed in (a test counting calls) is called afresh.
+ */
+export function solvedRow(row: { id: string; design: unknown; calibration: unknown }, solver?: (d: DesignSI) => Result): SolvedDesign {
+  if (!solver) {
+    const memo = storedSolution(row.design);
+    return { id: row.id, calibration: row.calibration, parsed: memo.parsed, result: memo.result };
+  }
   const parsed = parseDesign(row.design);
   let result: Result | null | undefined;
   return {
