@@ -68,7 +68,7 @@ export async function runApiBench(): Promise<void> {
   ];
   console.log(`\nAPI and pages against a bare node:http server answering the same bytes (autocannon, ${DURATION} s a run, loopback)`);
   try {
-    for (const r of rows) {
+    for (const r of rows.filter((x) => !process.env.BENCH_API_ONLY || x.name.includes(process.env.BENCH_API_ONLY))) {
       for (const n of [10, 50]) {
         const a = await r.app(n);
         const b = await r.bare(n);

@@ -6,7 +6,9 @@
  *   .br / .gz sibling written at build when the client accepts it,
  *   long-lived immutable caching for the fingerprinted /_astro/* files;
  * - the security headers on every response, static files included (rendered responses get theirs,
- *   with the page's CSP, from the middleware).
+ *   with the page's CSP, from the middleware);
+ * - the signed-in read of a design, and a repeat visit to a design page already rendered, answered with the
+ *   app's own services when the session is at hand (fast-reads.ts); everything else goes to the app.
  */
 import { createServer, type IncomingMessage, type Server, type ServerResponse } from 'node:http';
 import { createServer as createTlsServer } from 'node:https';
@@ -17,6 +19,7 @@ import { resolveClientAddress, isTrusted, trustedProxyList } from '../../src/ser
 import { commonSecurityHeaders, htmlCsp, NON_HTML_CSP } from '../../src/server/security/headers';
 import { HTTPS_HEADER } from '../../src/server/security/forwarded';
 import { pageKey, storedPage } from '../../src/server/security/page-cache';
+import { fastRead } from './fast-reads';
 
 type Handler = (req: IncomingMessage, res: ServerResponse) => void;
 
@@ -146,6 +149,13 @@ export function frontHandler(app: Handler, clientDir: string, trustedSpec: strin
         else sendFile(req, res, f, null, read(f.path), path);
         return;
       }
+    }
+    if (req.method === 'GET' && (req.url?.startsWith('/api/v1/designs/') || req.url?.startsWith('/designs/'))) {
+      fastRead(req, res).then(
+        (done) => done || app(req, res),
+        () => app(req, res),
+      );
+      return;
     }
     app(req, res);
   };

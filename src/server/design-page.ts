@@ -17,6 +17,7 @@ import type { BuildSheetQuery } from '../lib/buildsheet';
 import { reviewsOf } from './services/reviews';
 import { reviewStatus, type ReviewStatus } from '../lib/review/status';
 import type { GroupRole } from '../lib/permissions';
+import { renderKey } from './render-cache';
 
 /**
  * One design as the pages under /designs/[id] see it: authorized once and solved at most once per request,
@@ -131,4 +132,14 @@ export async function loadDesignPage(Astro: AstroGlobal, options: DesignPageOpti
   }
   const page = await load;
   return page ?? Astro.rewrite('/404');
+}
+
+/**
+ * The render-cache key of the design page (/designs/[id]) for this viewer at this address: everything the page
+ * and its layout read (the header reads the viewer and the address; the rest is the design, its stored
+ * calibration and its review state). The page and the front server's fast read both use it.
+ */
+export async function designPageKey(page: DesignPage, address: string): Promise<string> {
+  const review = await page.reviewStatus();
+  return renderKey('design-page', address, page.user, page.id, page.name, page.revision, page.role, page.updatedAt, page.groupId, page.groupRole, page.input, page.solved.calibration, review);
 }

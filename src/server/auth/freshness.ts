@@ -5,7 +5,9 @@
  * can be left, and the entry is dropped. One process: with several app processes a change is seen
  * by the others when their cookie copies expire (the cache's stated lifetime).
  */
-const changed = new Map<string, number>();
+// On globalThis, shared by the built app and the start script's front server (separate copies of this module).
+const g = globalThis as unknown as { __coilwrightChangedUsers?: Map<string, number> };
+const changed = (g.__coilwrightChangedUsers ??= new Map<string, number>());
 const MAX_ENTRIES = 100_000;
 
 export function markUserChanged(userId: string, now = Date.now()): void {

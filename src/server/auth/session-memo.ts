@@ -11,7 +11,10 @@ export type MemoSession = { user: SessionUser; session: { id: string; expiresAt:
 
 const MEMO_MS = 5_000;
 const MAX_ENTRIES = 10_000;
-const memo = new Map<string, { at: number; value: MemoSession }>();
+// On globalThis: the start script's front server (its own copy of this module, compiled from the sources)
+// answers some reads itself and must see the same sessions as the built app's middleware.
+const g = globalThis as unknown as { __coilwrightSessionMemo?: Map<string, { at: number; value: MemoSession }> };
+const memo = (g.__coilwrightSessionMemo ??= new Map<string, { at: number; value: MemoSession }>());
 const SESSION_COOKIES = /(?:^|;\s*)((?:__Secure-)?better-auth\.session_(?:token|data)=[^;]*)/g;
 
 /** The session cookies of a Cookie header, in order, as the memo's key; '' when there are none. */

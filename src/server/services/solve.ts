@@ -26,7 +26,9 @@ export function solveInput(input: unknown): { input: DesignInput; result: Result
  * saved once and read many times, so the 256 most recently read are kept, keyed by their JSON. Callers only
  * read or serialise what they get, never change it.
  */
-function storedSolution(input: unknown): { parsed: ParseDesignResult; result: Result | null } {
+type StoredSolution = { parsed: ParseDesignResult; readonly result: Result | null };
+
+function storedSolution(input: unknown): StoredSolution {
   const key = JSON.stringify(input);
   const hit = storedResults.get(key);
   if (hit !== undefined) {
@@ -35,13 +37,21 @@ function storedSolution(input: unknown): { parsed: ParseDesignResult; result: Re
     return hit;
   }
   const parsed = parseDesign(input);
-  const solution = { parsed, result: parsed.ok ? solve(parsed.design) : null };
+  let result: Result | null | undefined;
+  // solved on first read: a page that shows no result (a history) does not solve at all
+  const solution: StoredSolution = {
+    parsed,
+    get result() {
+      if (result === undefined) result = parsed.ok ? solve(parsed.design) : null;
+      return result;
+    },
+  };
   storedResults.set(key, solution);
   if (storedResults.size > 256) storedResults.delete(storedResults.keys().next().value as string);
   return solution;
 }
 
-const storedResults = new Map<string, { parsed: ParseDesignResult; result: Result | null }>();
+const storedResults = new Map<string, StoredSolution>();
 
 /** Solves a stored design; a design saved before a schema change still answers, with its result null. */
 export function solveStored(input: unknown): Result | null {
@@ -80,7 +90,14 @@ export type SolvedDesign = {
 export function solvedRow(row: { id: string; design: unknown; calibration: unknown }, solver?: (d: DesignSI) => Result): SolvedDesign {
   if (!solver) {
     const memo = storedSolution(row.design);
-    return { id: row.id, calibration: row.calibration, parsed: memo.parsed, result: memo.result };
+    return {
+      id: row.id,
+      calibration: row.calibration,
+      parsed: memo.parsed,
+      get result() {
+        return memo.result;
+      },
+    };
   }
   const parsed = parseDesign(row.design);
   let result: Result | null | undefined;
