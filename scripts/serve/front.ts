@@ -8,7 +8,8 @@
  * - the security headers on every response, static files included (rendered responses get theirs,
  *   with the page's CSP, from the middleware);
  * - the signed-in read of a design, and a repeat visit to a design page already rendered, answered with the
- *   app's own services when the session is at hand (fast-reads.ts); everything else goes to the app.
+ *   app's own services when the session is at hand, and POST /api/v1/solve (fast-answers.ts); everything
+ *   else goes to the app.
  */
 import { createServer, type IncomingMessage, type Server, type ServerResponse } from 'node:http';
 import { createServer as createTlsServer } from 'node:https';
@@ -19,7 +20,8 @@ import { resolveClientAddress, isTrusted, trustedProxyList } from '../../src/ser
 import { commonSecurityHeaders, htmlCsp, NON_HTML_CSP } from '../../src/server/security/headers';
 import { HTTPS_HEADER } from '../../src/server/security/forwarded';
 import { pageKey, storedPage } from '../../src/server/security/page-cache';
-import { fastRead } from './fast-reads';
+import { fastRead, fastSolve, sendError } from './fast-answers';
+import { ApiError } from '../../src/server/http';
 
 type Handler = (req: IncomingMessage, res: ServerResponse) => void;
 
@@ -154,6 +156,16 @@ export function frontHandler(app: Handler, clientDir: string, trustedSpec: strin
       fastRead(req, res).then(
         (done) => done || app(req, res),
         () => app(req, res),
+      );
+      return;
+    }
+    if (req.method === 'POST' && req.url === '/api/v1/solve') {
+      fastSolve(req, res).then(
+        (done) => done || app(req, res),
+        (e) => {
+          console.error('[front]', e);
+          if (!res.headersSent) void sendError(res, new ApiError('internal_error'), {});
+        },
       );
       return;
     }

@@ -1,7 +1,9 @@
 import { SlidingWindowLimiter, rateLimitHeaders, type LimitDecision } from './security/limiter';
 
 // One sliding-window limiter per bucket and limit, in memory (one process), each holding at most 50 000 clients.
-const limiters = new Map<string, SlidingWindowLimiter>();
+// On globalThis: the start script's front server (its own copy of this module) counts in the same windows.
+const g = globalThis as unknown as { __coilwrightLimiters?: Map<string, SlidingWindowLimiter> };
+const limiters = (g.__coilwrightLimiters ??= new Map<string, SlidingWindowLimiter>());
 
 function limiterFor(bucket: string, max: number, windowMs: number): SlidingWindowLimiter {
   const id = `${bucket}:${max}:${windowMs}`;

@@ -37,20 +37,54 @@ function prepareDesignById(db: Db) {
  * every call, so a person removed from a group loses the design at once.
  */
 export async function roleOn(designId: string, u: SessionUser | null): Promise<DesignAccess | null> {
-  const db = database();
-  const row = await designById(db).execute({ id: designId });
+  const row = await designById(database()).execute({ id: designId });
   if (!row || !u) return null;
+  const found = await roleOnRow(row, u);
+  return found ? { row, ...found } : null;
+}
+
+/** The part of a design row that decides roles (and names the revision), without the design itself. */
+export type DesignHead = Pick<DesignRow, 'id' | 'ownerId' | 'groupId' | 'name' | 'revision' | 'updatedAt'>;
+
+async function roleOnRow(row: Pick<DesignRow, 'id' | 'ownerId' | 'groupId'>, u: SessionUser): Promise<Omit<DesignAccess, 'row'> | null> {
+  const db = database();
+  const designId = row.id;
   const g = row.groupId ? await db.query.groupMembers.findFirst({ where: and(eq(groupMembers.groupId, row.groupId), eq(groupMembers.userId, u.id)) }) : undefined;
   const groupRole = g?.role ?? null;
-  if (row.ownerId === u.id) return { row, role: 'owner', groupRole, via: 'direct' };
+  if (row.ownerId === u.id) return { role: 'owner', groupRole, via: 'direct' };
   const m = await db.query.designMembers.findFirst({ where: and(eq(designMembers.designId, designId), eq(designMembers.userId, u.id)) });
   const fromGroup = groupRole ? designRoleOfGroupRole(groupRole) : null;
   if (m || fromGroup) {
     const role = strongerDesignRole(m?.role ?? null, fromGroup);
-    return { row, role, groupRole, via: m && (!fromGroup || role === m.role) ? 'direct' : 'group' };
+    return { role, groupRole, via: m && (!fromGroup || role === m.role) ? 'direct' : 'group' };
   }
-  if (u.role === 'admin') return { row, role: 'admin', groupRole: null, via: 'site' };
+  if (u.role === 'admin') return { role: 'admin', groupRole: null, via: 'site' };
   return null;
+}
+
+function prepareDesignHead(db: Db) {
+  const d = designs;
+  return db
+    .select({ id: d.id, ownerId: d.ownerId, groupId: d.groupId, name: d.name, revision: d.revision, updatedAt: d.updatedAt })
+    .from(d)
+    .where(eq(d.id, sql.placeholder('id')))
+    .prepare();
+}
+const preparedHeads = new WeakMap<Db, ReturnType<typeof prepareDesignHead>>();
+
+/**
+ * Like {@link authorize}, reading only the design's head (owner, group, name, revision, update time), for a
+ * caller that answers from what it stored for that revision and reads the whole row only when it has nothing.
+ */
+export async function authorizeHead(designId: string, u: SessionUser | null, action: DesignAction): Promise<{ head: DesignHead; role: DesignRole }> {
+  const db = database();
+  let q = preparedHeads.get(db);
+  if (!q) preparedHeads.set(db, (q = prepareDesignHead(db)));
+  const head = await q.get({ id: designId });
+  const found = head && u ? await roleOnRow(head, u) : null;
+  if (!head || !found) throw new ApiError('not_found', 'No such design.');
+  if (!designCan(found.role, action)) throw new ApiError('forbidden');
+  return { head, role: found.role };
 }
 
 /** Loads a design the user may act on; no role at all is a 404 so a stranger learns nothing. */

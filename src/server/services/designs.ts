@@ -7,7 +7,7 @@ import type { z } from 'zod';
 import type { createDesignBodySchema, DesignListItem, DesignRecord, ResultSummary, updateDesignBodySchema } from '../../lib/api/contracts';
 import type { SessionUser } from '../session';
 import { ApiError } from '../http';
-import { authorize, type DesignRow } from './access';
+import { authorize, authorizeHead, type DesignRow } from './access';
 import { requireDesignField, resultSummary, solvedRow, solveStored } from './solve';
 import { calibrationOf } from './measurements';
 import { readCalibration } from '../../lib/buildsheet/calibration';
@@ -106,15 +106,19 @@ export async function getDesign(u: SessionUser | null, id: string): Promise<Desi
  * name, update time, group and the caller's role, and a read of the same revision sends the same bytes again.
  */
 export async function getDesignJson(u: SessionUser | null, id: string): Promise<string> {
-  const { row, role } = await authorize(id, u, 'read');
-  const key = `${row.id}\u0000${row.revision}\u0000${row.updatedAt.getTime()}\u0000${row.name}\u0000${row.groupId ?? ''}\u0000${role}`;
-  let text = designTexts.get(key);
-  if (text === undefined) {
-    text = JSON.stringify(designRecordOf(row, role));
-    designTexts.set(key, text);
-    if (designTexts.size > 256) designTexts.delete(designTexts.keys().next().value as string);
-  }
+  const { head, role } = await authorizeHead(id, u, 'read');
+  const hit = designTexts.get(designTextKey(head, role));
+  if (hit !== undefined) return hit;
+  // Nothing kept for this revision: read the whole row, and keep its text under the row's own key.
+  const full = await authorize(id, u, 'read');
+  const text = JSON.stringify(designRecordOf(full.row, full.role));
+  designTexts.set(designTextKey(full.row, full.role), text);
+  if (designTexts.size > 256) designTexts.delete(designTexts.keys().next().value as string);
   return text;
+}
+
+function designTextKey(h: Pick<DesignRow, 'id' | 'revision' | 'updatedAt' | 'name' | 'groupId'>, role: DesignRole): string {
+  return `${h.id}\u0000${h.revision}\u0000${h.updatedAt.getTime()}\u0000${h.name}\u0000${h.groupId ?? ''}\u0000${role}`;
 }
 
 const designTexts = new Map<string, string>();
