@@ -1,4 +1,5 @@
-import { parseDesign } from '../lib/design';
+import { parseDesign } from '../lib/design/parse';
+import { FullReaderNeeded, withFullReader } from '../lib/format/units-reader';
 import { fieldLabel, issueText } from '../lib/design/labels';
 import { checkDesign } from '../solver/system/checks';
 import {
@@ -166,12 +167,15 @@ export function goalAnswer(d: DesignSI, goal: Goal): GoalAnswer | null {
   }
 }
 
-/** Runs one request; the same code answers in the worker and, for tests, on the main thread. */
 /** A thrown error as a reply the page can show with a way to try again. */
 export function solverFailure(id: number, e: unknown): SolverResponse {
   return { id, ok: false, failed: true, issues: [], message: e instanceof Error && e.message ? e.message : SOLVER_FAILED_MESSAGE };
 }
 
+/**
+ * Runs one request; the same code answers in the worker and, for tests, on the main thread. Throws
+ * `FullReaderNeeded` when a text needs mathjs and it is not loaded (see `runRequestLoading`).
+ */
 export function runRequest(id: number, request: SolverRequest, now: () => number = () => performance.now()): SolverResponse {
   const t0 = now();
   try {
@@ -193,6 +197,20 @@ export function runRequest(id: number, request: SolverRequest, now: () => number
       case 'goal':
         return { id, ok: true, reply: { type: 'goal', data: goalAnswer(d, request.goal) } };
     }
+  } catch (e) {
+    // a text needs mathjs, which is not loaded yet: `runRequestLoading` loads it and asks again
+    if (e instanceof FullReaderNeeded) throw e;
+    return solverFailure(id, e);
+  }
+}
+
+/**
+ * Runs one request as `runRequest` does, loading the full unit reader (mathjs) first when a text of the
+ * design needs it: the plain forms ("12 mm", "20 nF") are read without it.
+ */
+export async function runRequestLoading(id: number, request: SolverRequest, now: () => number = () => performance.now()): Promise<SolverResponse> {
+  try {
+    return await withFullReader(() => runRequest(id, request, now));
   } catch (e) {
     return solverFailure(id, e);
   }

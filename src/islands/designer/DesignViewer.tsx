@@ -17,15 +17,20 @@ export type DesignViewerProps = {
   unitSystem?: UnitSystem;
   /** values adopted on the bench; the tap shown is calibrated by them */
   calibration?: Calibration | null;
+  /** the design already resolved into SI (by the page's server): the viewer then starts no solver worker to read it */
+  designSI?: DesignSI | null;
 };
 
 /** A saved design, read-only: drawing, results and charts, no inputs. For share links and build sheets. */
-export default function DesignViewer({ name, design, result, unitSystem = 'metric', calibration = null }: DesignViewerProps) {
+export default function DesignViewer({ name, design, result, unitSystem = 'metric', calibration = null, designSI }: DesignViewerProps) {
   const [system, setSystem] = useState<UnitSystem>(unitSystem);
   const inputKey = useMemo(() => JSON.stringify(design), [design]);
   // the worker resolves the stored input into SI for the drawing and the charts
-  const [parsed, setParsed] = useState<{ ok: true; design: DesignSI } | { ok: false; issues: DesignIssue[] } | null>(null);
+  const given = useMemo(() => (designSI ? { ok: true as const, design: designSI } : null), [designSI]);
+  const [resolved, setParsed] = useState<{ ok: true; design: DesignSI } | { ok: false; issues: DesignIssue[] } | null>(null);
+  const parsed = given ?? resolved;
   useEffect(() => {
+    if (given) return;
     let live = true;
     void solverClient()
       .request({ type: 'solve', input: design })
@@ -37,7 +42,7 @@ export default function DesignViewer({ name, design, result, unitSystem = 'metri
     return () => {
       live = false;
     };
-  }, [design]);
+  }, [design, given]);
   if (!result || (parsed && !parsed.ok)) {
     return (
       <p className="cw-alert" role="status">

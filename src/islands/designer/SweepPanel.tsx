@@ -1,5 +1,6 @@
 import { lazy, Suspense, useId, useMemo, useState, type FormEvent } from 'react';
-import { sweepablePaths, type DesignSI } from '~/solver';
+import type { DesignSI } from '~/solver';
+import { sweepablePaths } from '~/solver/sweep-paths';
 import { formatSignificant, lengthInputText, lengthsInSystem, formatQuantity, parseQuantityLazy, readNumberText, type UnitSystem } from '~/lib/format';
 import { findDesignField } from '~/lib/design/registry';
 import type { SweepData } from '../../workers/protocol';

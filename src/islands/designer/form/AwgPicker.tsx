@@ -1,5 +1,6 @@
 import { useFormContext, useWatch } from 'react-hook-form';
-import { AWG_MAX, AWG_MIN, awgDiameter, insulatedDiameterAwg, INSULATION_SOURCE } from '~/solver';
+import { AWG_MAX, AWG_MIN, awgDiameter } from '~/solver/wire/awg';
+import { insulatedDiameterAwg, INSULATION_SOURCE } from '~/solver/wire/insulation';
 import { formatLength, type UnitSystem } from '~/lib/format';
 import { designField } from '~/lib/design/registry';
 import type { FormValues } from './values';

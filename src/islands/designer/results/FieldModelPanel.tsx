@@ -1,9 +1,9 @@
-import { lazy, memo, Suspense } from 'react';
+import { memo } from 'react';
 import type { Result } from '~/solver';
 import { formatFixed, formatQuantity as q, type UnitSystem } from '~/lib/format';
+import VoltageProfileChart from '../../charts/VoltageProfileChart';
 import { Group, Row } from './Row';
 
-const VoltageProfileChart = lazy(() => import('../../charts/VoltageProfileChart'));
 
 type Props = { result: Result; system: UnitSystem };
 
@@ -52,9 +52,7 @@ export const FieldModelPanel = memo(function FieldModelPanel({ result: r, system
           note={s.former.assumed ? 'Assumed: a thin-walled PVC pipe. Give the form’s material and wall to refine it.' : undefined}
         />
       </dl>
-      <Suspense fallback={<p className="text-sm text-ink-soft">Loading the chart…</p>}>
-        <VoltageProfileChart profile={s.voltageProfile} system={system} />
-      </Suspense>
+      <VoltageProfileChart profile={s.voltageProfile} system={system} />
     </Group>
   );
 });
