@@ -29,7 +29,7 @@ import type {
   SweepRequest,
   TuningCurve,
 } from './protocol';
-import { SOLVER_FAILED_MESSAGE } from './protocol';
+import { solveRequest, solverFailure } from './solve-task';
 
 const TUNING_POINTS = 60;
 const COUPLING_POINTS = 60;
@@ -167,26 +167,19 @@ export function goalAnswer(d: DesignSI, goal: Goal): GoalAnswer | null {
   }
 }
 
-/** A thrown error as a reply the page can show with a way to try again. */
-export function solverFailure(id: number, e: unknown): SolverResponse {
-  return { id, ok: false, failed: true, issues: [], message: e instanceof Error && e.message ? e.message : SOLVER_FAILED_MESSAGE };
-}
+export { solverFailure };
 
 /**
  * Runs one request; the same code answers in the worker and, for tests, on the main thread. Throws
  * `FullReaderNeeded` when a text needs mathjs and it is not loaded (see `runRequestLoading`).
  */
 export function runRequest(id: number, request: SolverRequest, now: () => number = () => performance.now()): SolverResponse {
-  const t0 = now();
+  if (request.type === 'solve') return solveRequest(id, request.input, now);
   try {
     const parsed = parseDesign(request.input);
     if (!parsed.ok) return { id, ok: false, issues: parsed.issues };
     const d = parsed.design;
     switch (request.type) {
-      case 'solve': {
-        const result = solve(d);
-        return { id, ok: true, reply: { type: 'solve', data: { design: d, result, ms: now() - t0 } } };
-      }
       case 'sweep':
         return { id, ok: true, reply: { type: 'sweep', data: sweepData(d, request.sweep) } };
       case 'charts': {
