@@ -1,5 +1,5 @@
 import { issueText } from '~/lib/design/labels';
-import { useEffect, useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useState } from 'react';
 import type { DesignInput } from '~/lib/design';
 import type { DesignIssue, DesignSI, Result } from '~/solver';
 import { solverClient } from './solver-client';
@@ -25,6 +25,7 @@ export type DesignViewerProps = {
 export default function DesignViewer({ name, design, result, unitSystem = 'metric', calibration = null, designSI }: DesignViewerProps) {
   const [system, setSystem] = useState<UnitSystem>(unitSystem);
   const inputKey = useMemo(() => JSON.stringify(design), [design]);
+  const readInput = useCallback(() => design, [design]);
   // the worker resolves the stored input into SI for the drawing and the charts
   const given = useMemo(() => (designSI ? { ok: true as const, design: designSI } : null), [designSI]);
   const [resolved, setParsed] = useState<{ ok: true; design: DesignSI } | { ok: false; issues: DesignIssue[] } | null>(null);
@@ -74,7 +75,7 @@ export default function DesignViewer({ name, design, result, unitSystem = 'metri
           <ResultsPanel result={result} system={system} calibration={calibration} design={parsed.design} />
         </section>
       </div>
-      <ChartsPanel design={parsed.design} input={design} inputKey={inputKey} system={system}  />
+      <ChartsPanel design={parsed.design} input={readInput} inputKey={inputKey} system={system} />
     </div>
   );
 }

@@ -1,6 +1,6 @@
-import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { useCallback, useDeferredValue, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import { primaryInnerDefault } from '~/lib/design/defaults';
-import { FormProvider, useForm, useWatch } from 'react-hook-form';
+import { FormProvider, useForm, useWatch, type UseFormReturn } from 'react-hook-form';
 import { withApi } from '~/lib/api/provider';
 import type { DesignInput } from '~/lib/design';
 import { formatFixed, formatQuantity, lengthInputText, type UnitSystem } from '~/lib/format';
@@ -11,7 +11,7 @@ import type { Goal, GoalAnswer } from '../../workers/protocol';
 import { proposeTank, type TankForm } from '~/lib/design/tank-goal';
 import { readSimpleQuantity } from '~/lib/format';
 import type { GoalApplied } from './GoalPanel';
-import { FieldFeedbackContext, fieldId, type FieldFeedback } from './form/field-context';
+import { FieldFeedbackContext, FieldFeedbackStore, fieldId, type FieldFeedback } from './form/field-context';
 import { SecondaryPart, ToploadPart, PrimaryPart, TankPart, SupplyPart, TuningPart } from './form/parts';
 import { designResolver } from './form/resolver';
 import { convertLengths, emptyValues, fromDesignInput, toDesignInput, type FormValues } from './form/values';
@@ -47,6 +47,19 @@ function getPath(o: unknown, path: string): unknown {
 
 const keyOf = (v: FormValues) => JSON.stringify([v.name.trim(), toDesignInput(v)]);
 
+const NO_ISSUES: never[] = [];
+const NO_WARNINGS: SolverWarning[] = [];
+
+/** The value as given, or the one given before when it has the same content (compared as JSON). */
+function useSameContent<T>(value: T): T {
+  const [kept, setKept] = useState<{ value: T; key: string }>(() => ({ value, key: JSON.stringify(value) }));
+  if (kept.value === value) return value;
+  const key = JSON.stringify(value);
+  if (key === kept.key) return kept.value;
+  setKept({ value, key });
+  return value;
+}
+
 type GoalPath =
   | 'secondary.turns'
   | 'secondary.elevation'
@@ -80,19 +93,29 @@ function startValues(props: DesignerProps): FormValues {
 }
 
 function DesignerInner(props: DesignerProps) {
-  const { signedIn, unitSystem, record = null, start, signInHref = '/sign-in?next=%2Fdesigns%2Fnew' } = props;
-  const editing = record !== null;
-  const readOnly = record?.role === 'viewer';
   // the values the form opened with; later props never reset a form being edited
   const [initial] = useState(() => startValues(props));
+  const form = useForm<FormValues>({ defaultValues: initial, resolver: designResolver, mode: 'onSubmit', reValidateMode: 'onChange' });
+  // The form's context is given here, above the component that watches every value: the context stays the same
+  // object while the builder types, so the fields render again only for what concerns them.
+  return (
+    <FormProvider {...form}>
+      <DesignerBody {...props} initial={initial} form={form} />
+    </FormProvider>
+  );
+}
+
+function DesignerBody(props: DesignerProps & { initial: FormValues; form: UseFormReturn<FormValues> }) {
+  const { signedIn, unitSystem, record = null, start, signInHref = '/sign-in?next=%2Fdesigns%2Fnew', initial, form } = props;
+  const editing = record !== null;
+  const readOnly = record?.role === 'viewer';
   const [baseline, setBaseline] = useState<FormValues>(initial);
 
-  const form = useForm<FormValues>({ defaultValues: initial, resolver: designResolver, mode: 'onSubmit', reValidateMode: 'onChange' });
   const { control, getValues, reset, setValue, formState, handleSubmit } = form;
   const values = useWatch({ control }) as FormValues;
   const input = useMemo(() => toDesignInput(values), [values]);
   const inputKey = useMemo(() => JSON.stringify(input), [input]);
-  const currentKey = useMemo(() => keyOf(values), [values]);
+  const currentKey = useMemo(() => JSON.stringify([values.name.trim(), input]), [values.name, input]);
   const { live, last, pending, retry } = useLiveSolve(input, inputKey);
 
   const units = useUnitSystem(unitSystem, signedIn);
@@ -101,7 +124,8 @@ function DesignerInner(props: DesignerProps) {
 
   // what "no unsaved changes" compares with: the last saved values, or the values the page started from
   const [saved, setSaved] = useState<FormValues | null>(editing ? initial : null);
-  const dirty = currentKey !== keyOf(saved ?? baseline);
+  const savedKey = useMemo(() => keyOf(saved ?? baseline), [saved, baseline]);
+  const dirty = currentKey !== savedKey;
   const guard = useLeaveGuard(dirty && (editing || signedIn) && !readOnly);
   const save = useDesignSave({
     record,
@@ -135,19 +159,22 @@ function DesignerInner(props: DesignerProps) {
   useEffect(() => clearServerIssues(), [inputKey, clearServerIssues]);
 
   const serverIssues = save.serverIssues;
-  const liveIssues = useMemo(() => (live.status === 'invalid' ? live.issues : []), [live]);
-  const warnings = useMemo<SolverWarning[]>(() => (live.status === 'ok' ? live.result.warnings : []), [live]);
-  const feedback = useMemo<FieldFeedback>(
-    () => ({
-      errorFor: (path) =>
-        serverIssues.find((i) => i.path === path)?.message ??
-        liveIssues.find((i) => i.path === path)?.message ??
-        (getPath(formState.errors, path) as { message?: string } | undefined)?.message,
-      warningsFor: (path) => warnings.filter((w) => w.path === path),
-      readOnly,
-    }),
-    [serverIssues, liveIssues, warnings, formState.errors, readOnly],
-  );
+  // the same messages as before keep the same arrays, so the form's fields do not render again for every result
+  const liveIssues = useSameContent(live.status === 'invalid' ? live.issues : NO_ISSUES);
+  const warnings = useSameContent<SolverWarning[]>(live.status === 'ok' ? live.result.warnings : NO_WARNINGS);
+  // read afresh on every render (the form's own errors can change in place); each field renders again only when
+  // its own messages change (`FieldFeedbackStore`)
+  const errors = formState.errors;
+  const feedback: FieldFeedback = {
+    errorFor: (path) =>
+      serverIssues.find((i) => i.path === path)?.message ??
+      liveIssues.find((i) => i.path === path)?.message ??
+      (getPath(errors, path) as { message?: string } | undefined)?.message,
+    warningsFor: (path) => warnings.filter((w) => w.path === path),
+    readOnly,
+  };
+  const [feedbackStore] = useState(() => new FieldFeedbackStore(feedback));
+  useLayoutEffect(() => feedbackStore.set(feedback));
 
   const submit = handleSubmit(save.onValid, save.onInvalid);
   useSaveShortcut(() => void submit());
@@ -169,7 +196,7 @@ function DesignerInner(props: DesignerProps) {
   );
 
   /** Writes a goal's answer into the form and says exactly what changed, with a way to put it back. */
-  function applyGoal(a: GoalAnswer, goal: Goal): GoalApplied {
+  function writeGoal(a: GoalAnswer, goal: Goal): GoalApplied {
     const opts = { shouldDirty: true, shouldValidate: formState.isSubmitted };
     const writes: Array<[GoalPath, string]> = [];
     let message = '';
@@ -210,6 +237,14 @@ function DesignerInner(props: DesignerProps) {
     return { ok: true, message, undo: () => before.forEach(([path, value]) => setValue(path, value as never, opts)) };
   }
 
+  // the goal panel keeps one callback and reads the design when it runs, so typing does not render it again
+  const latest = useRef({ writeGoal, input });
+  useEffect(() => {
+    latest.current = { writeGoal, input };
+  });
+  const applyGoal = useCallback((a: GoalAnswer, goal: Goal) => latest.current.writeGoal(a, goal), []);
+  const currentInput = useCallback(() => latest.current.input, []);
+
   function bringBack() {
     if (draft.bringBack()) save.setStatus('Your version is back; save to keep it as the newest revision.');
   }
@@ -221,12 +256,15 @@ function DesignerInner(props: DesignerProps) {
     setBaseline(v);
   }
 
-  const shown = live.status === 'ok' ? { design: live.design, result: live.result } : last;
+  const shown = useMemo(() => (live.status === 'ok' ? { design: live.design, result: live.result } : last), [live, last]);
+  // the headline figures update first; the drawing and the charts follow in a render of their own
+  const later = useDeferredValue(shown);
+  const laterKey = useDeferredValue(inputKey);
   const nameError = feedback.errorFor('name');
 
   return (
-    <FormProvider {...form}>
-      <FieldFeedbackContext.Provider value={feedback}>
+    <>
+      <FieldFeedbackContext.Provider value={feedbackStore}>
         <div className="space-y-6">
           <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
             <div className="space-y-4">
@@ -268,15 +306,15 @@ function DesignerInner(props: DesignerProps) {
                 <SupplyPart />
                 <TuningPart system={system} />
               </form>
-              <GoalPanel input={input} system={system} hasPrimary={values.primary.enabled} hasTank={values.tank.mode !== 'none'} bridge={values.supply.kind === 'solid-state'} readOnly={readOnly} apply={applyGoal} />
+              <GoalPanel input={currentInput} system={system} hasPrimary={values.primary.enabled} hasTank={values.tank.mode !== 'none'} bridge={values.supply.kind === 'solid-state'} readOnly={readOnly} apply={applyGoal} />
             </div>
-            <ResultsAside live={live} pending={pending} shown={shown} system={system} onRetry={retry} calibration={props.calibration ?? null} />
+            <ResultsAside live={live} pending={pending} shown={shown} drawing={later} system={system} onRetry={retry} calibration={props.calibration ?? null} />
           </div>
-          {shown && <ChartsPanel design={shown.design} input={input} inputKey={inputKey} system={system} />}
+          {later && <ChartsPanel design={later.design} input={currentInput} inputKey={laterKey} system={system} />}
         </div>
         {save.conflict && <ConflictDialog onReload={save.reloadLatest} onCopy={save.saveAsCopy} onClose={save.closeConflict} />}
       </FieldFeedbackContext.Provider>
-    </FormProvider>
+    </>
   );
 }
 

@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import type { DesignSI, Result } from '~/solver';
 import type { Calibration } from '~/lib/buildsheet/calibration';
 import { lengthsInSystem, type UnitSystem } from '~/lib/format';
@@ -11,13 +12,16 @@ type Props = {
   live: LiveState;
   pending: boolean;
   shown: { design: DesignSI; result: Result } | null;
+  /** what the drawing shows: `shown`, or the one before it while a newer result is on its way to the figures */
+  drawing?: { design: DesignSI; result: Result } | null;
   system: UnitSystem;
   onRetry: () => void;
   calibration?: Calibration | null;
 };
 
 /** The live results beside the form: solve state, what the results wait for, the drawing and the figures. */
-export function ResultsAside({ live, pending, shown, system, onRetry, calibration }: Props) {
+export const ResultsAside = memo(function ResultsAside({ live, pending, shown, drawing, system, onRetry, calibration }: Props) {
+  const sketch = drawing ?? shown;
   const issues = live.status === 'invalid' ? live.issues : [];
   return (
     <aside aria-labelledby="results-title" className="space-y-4">
@@ -58,7 +62,7 @@ export function ResultsAside({ live, pending, shown, system, onRetry, calibratio
             <h3 id="drawing-title" className="mb-2 text-base font-semibold">
               Side section
             </h3>
-            <CoilDrawing design={shown.design} result={shown.result} system={system} />
+            <CoilDrawing design={(sketch ?? shown).design} result={(sketch ?? shown).result} system={system} />
           </section>
           <ResultsPanel result={shown.result} system={system} stale={live.status !== 'ok'} calibration={calibration} design={shown.design} />
         </>
@@ -67,4 +71,4 @@ export function ResultsAside({ live, pending, shown, system, onRetry, calibratio
       )}
     </aside>
   );
-}
+});

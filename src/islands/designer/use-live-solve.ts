@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { useCallback, useLayoutEffect, useRef, useState } from 'react';
 import type { DesignIssue, DesignSI, Result } from '~/solver';
 import { solverClient } from './solver-client';
 
@@ -29,15 +29,14 @@ export function useLiveSolve(
   const shown = useRef(0);
   const lastRun = useRef(-Infinity);
   const inputRef = useRef(input);
-  useEffect(() => {
+  useLayoutEffect(() => {
     inputRef.current = input;
   }, [input]);
 
-  useEffect(() => {
+  // a layout effect: the request leaves in the commit of the keystroke itself, not in a later task
+  useLayoutEffect(() => {
     const mine = ++seq.current;
-    setPending(true);
-    const wait = Math.max(0, lastRun.current + QUIET_MS - performance.now());
-    const timer = setTimeout(async () => {
+    const run = async () => {
       lastRun.current = performance.now();
       const r = await solverClient().request({ type: 'solve', input: inputRef.current });
       if (mine < shown.current) return;
@@ -48,7 +47,16 @@ export function useLiveSolve(
         setLast({ design: r.reply.data.design, result: r.reply.data.result });
       } else if (!r.ok && r.failed) setLive({ status: 'failed', message: r.message });
       else if (!r.ok) setLive({ status: 'invalid', issues: r.issues, message: r.message });
-    }, wait);
+    };
+    const wait = lastRun.current + QUIET_MS - performance.now();
+    // after a pause the request goes at once, in this effect; a burst of keys waits for the window to end
+    if (wait <= 0) {
+      void run();
+      setPending(true);
+      return;
+    }
+    setPending(true);
+    const timer = setTimeout(run, wait);
     return () => clearTimeout(timer);
   }, [key, attempt]);
 

@@ -1,4 +1,4 @@
-import { memo } from 'react';
+import { memo, useDeferredValue } from 'react';
 import type { Result } from '~/solver';
 import { formatFixed, formatQuantity as q, type UnitSystem } from '~/lib/format';
 import VoltageProfileChart from '../../charts/VoltageProfileChart';
@@ -7,9 +7,13 @@ import { Group, Row } from './Row';
 
 type Props = { result: Result; system: UnitSystem };
 
+const NO_PROFILE: ReadonlyArray<{ height: number; voltage: number }> = [];
+
 /** The whole-resonator field model: lumped against field frequency, the shielding, the modes and the voltage along the winding. */
 export const FieldModelPanel = memo(function FieldModelPanel({ result: r, system }: Props) {
   const s = r.system;
+  // the figures update with the result; the chart of the voltage along the winding follows in a render of its own
+  const profile = useDeferredValue(s?.voltageProfile ?? NO_PROFILE);
   if (!s || s.voltageProfile.length === 0) return null;
   const shift = s.resonantFrequency / s.lumpedResonantFrequency - 1;
   const interaction = s.fieldCapacitance.interaction;
@@ -52,7 +56,7 @@ export const FieldModelPanel = memo(function FieldModelPanel({ result: r, system
           note={s.former.assumed ? 'Assumed: a thin-walled PVC pipe. Give the form’s material and wall to refine it.' : undefined}
         />
       </dl>
-      <VoltageProfileChart profile={s.voltageProfile} system={system} />
+      <VoltageProfileChart profile={profile.length > 0 ? profile : s.voltageProfile} system={system} />
     </Group>
   );
 });
