@@ -1,4 +1,4 @@
-import { lazy, memo, Suspense, useEffect, useRef, useState } from 'react';
+import { lazy, memo, Suspense, useDeferredValue, useEffect, useRef, useState } from 'react';
 import type { DesignSI } from '~/solver';
 import type { UnitSystem } from '~/lib/format';
 import type { ChartsData } from '../../workers/protocol';
@@ -88,7 +88,9 @@ function Charts({ input, inputKey, system }: { input: () => unknown; inputKey: s
 }
 
 /** The charts below the results, loaded only when the builder scrolls down to them. */
-export const ChartsPanel = memo(function ChartsPanel({ design, input, inputKey, system, showSweep = true }: Props) {
+export const ChartsPanel = memo(function ChartsPanel({ design: given, input, inputKey, system, showSweep = true }: Props) {
+  // the results beside the form update first; the sweep's ranges follow in a render of their own
+  const design = useDeferredValue(given);
   return (
     <section aria-labelledby="charts-title" className="space-y-4">
       <h2 id="charts-title" className="text-xl font-semibold">

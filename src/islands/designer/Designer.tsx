@@ -1,4 +1,4 @@
-import { useCallback, useDeferredValue, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import { primaryInnerDefault } from '~/lib/design/defaults';
 import { FormProvider, useForm, useWatch, type UseFormReturn } from 'react-hook-form';
 import { withApi } from '~/lib/api/provider';
@@ -50,14 +50,21 @@ const keyOf = (v: FormValues) => JSON.stringify([v.name.trim(), toDesignInput(v)
 const NO_ISSUES: never[] = [];
 const NO_WARNINGS: SolverWarning[] = [];
 
-/** The value as given, or the one given before when it has the same content (compared as JSON). */
+/** Plain data that keeps its identity while its content (compared as JSON) stays the same. */
 function useSameContent<T>(value: T): T {
-  const [kept, setKept] = useState<{ value: T; key: string }>(() => ({ value, key: JSON.stringify(value) }));
-  if (kept.value === value) return value;
   const key = JSON.stringify(value);
-  if (key === kept.key) return kept.value;
-  setKept({ value, key });
-  return value;
+  return useMemo(() => JSON.parse(key) as T, [key]);
+}
+
+/** The form's own error messages by path: what the fields show, as a text that changes only when they do. */
+function errorMessages(errors: unknown, prefix = '', out: string[] = []): string[] {
+  if (!errors || typeof errors !== 'object') return out;
+  const e = errors as Record<string, unknown>;
+  if (typeof e.message === 'string') out.push(`${prefix}\u0000${e.message}`);
+  for (const [k, v] of Object.entries(e)) {
+    if (k !== 'ref' && k !== 'message' && k !== 'type' && v && typeof v === 'object') errorMessages(v, prefix ? `${prefix}.${k}` : k, out);
+  }
+  return out;
 }
 
 type GoalPath =
@@ -162,19 +169,25 @@ function DesignerBody(props: DesignerProps & { initial: FormValues; form: UseFor
   // the same messages as before keep the same arrays, so the form's fields do not render again for every result
   const liveIssues = useSameContent(live.status === 'invalid' ? live.issues : NO_ISSUES);
   const warnings = useSameContent<SolverWarning[]>(live.status === 'ok' ? live.result.warnings : NO_WARNINGS);
-  // read afresh on every render (the form's own errors can change in place); each field renders again only when
-  // its own messages change (`FieldFeedbackStore`)
+  // the form's own errors can change in place: they are read by their messages, so the feedback changes when
+  // they do; each field renders again only when its own messages change (`FieldFeedbackStore`)
   const errors = formState.errors;
-  const feedback: FieldFeedback = {
-    errorFor: (path) =>
-      serverIssues.find((i) => i.path === path)?.message ??
-      liveIssues.find((i) => i.path === path)?.message ??
-      (getPath(errors, path) as { message?: string } | undefined)?.message,
-    warningsFor: (path) => warnings.filter((w) => w.path === path),
-    readOnly,
-  };
+  const errorsKey = errorMessages(errors).join('\u0001');
+  const feedback = useMemo<FieldFeedback>(
+    () => ({
+      errorFor: (path) =>
+        serverIssues.find((i) => i.path === path)?.message ??
+        liveIssues.find((i) => i.path === path)?.message ??
+        (getPath(errors, path) as { message?: string } | undefined)?.message,
+      warningsFor: (path) => warnings.filter((w) => w.path === path),
+      readOnly,
+    }),
+    // errorsKey stands for the content of `errors`
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+    [serverIssues, liveIssues, warnings, errorsKey, readOnly],
+  );
   const [feedbackStore] = useState(() => new FieldFeedbackStore(feedback));
-  useLayoutEffect(() => feedbackStore.set(feedback));
+  useLayoutEffect(() => feedbackStore.set(feedback), [feedbackStore, feedback]);
 
   const submit = handleSubmit(save.onValid, save.onInvalid);
   useSaveShortcut(() => void submit());
@@ -258,8 +271,6 @@ function DesignerBody(props: DesignerProps & { initial: FormValues; form: UseFor
 
   const shown = useMemo(() => (live.status === 'ok' ? { design: live.design, result: live.result } : last), [live, last]);
   // the headline figures update first; the drawing and the charts follow in a render of their own
-  const later = useDeferredValue(shown);
-  const laterKey = useDeferredValue(inputKey);
   const nameError = feedback.errorFor('name');
 
   return (
@@ -308,9 +319,9 @@ function DesignerBody(props: DesignerProps & { initial: FormValues; form: UseFor
               </form>
               <GoalPanel input={currentInput} system={system} hasPrimary={values.primary.enabled} hasTank={values.tank.mode !== 'none'} bridge={values.supply.kind === 'solid-state'} readOnly={readOnly} apply={applyGoal} />
             </div>
-            <ResultsAside live={live} pending={pending} shown={shown} drawing={later} system={system} onRetry={retry} calibration={props.calibration ?? null} />
+            <ResultsAside live={live} pending={pending} shown={shown} system={system} onRetry={retry} calibration={props.calibration ?? null} />
           </div>
-          {later && <ChartsPanel design={later.design} input={currentInput} inputKey={laterKey} system={system} />}
+          {shown && <ChartsPanel design={shown.design} input={currentInput} inputKey={inputKey} system={system} />}
         </div>
         {save.conflict && <ConflictDialog onReload={save.reloadLatest} onCopy={save.saveAsCopy} onClose={save.closeConflict} />}
       </FieldFeedbackContext.Provider>

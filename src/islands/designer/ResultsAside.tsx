@@ -1,4 +1,4 @@
-import { memo } from 'react';
+import { memo, useDeferredValue } from 'react';
 import type { DesignSI, Result } from '~/solver';
 import type { Calibration } from '~/lib/buildsheet/calibration';
 import { lengthsInSystem, type UnitSystem } from '~/lib/format';
@@ -12,16 +12,15 @@ type Props = {
   live: LiveState;
   pending: boolean;
   shown: { design: DesignSI; result: Result } | null;
-  /** what the drawing shows: `shown`, or the one before it while a newer result is on its way to the figures */
-  drawing?: { design: DesignSI; result: Result } | null;
   system: UnitSystem;
   onRetry: () => void;
   calibration?: Calibration | null;
 };
 
 /** The live results beside the form: solve state, what the results wait for, the drawing and the figures. */
-export const ResultsAside = memo(function ResultsAside({ live, pending, shown, drawing, system, onRetry, calibration }: Props) {
-  const sketch = drawing ?? shown;
+export const ResultsAside = memo(function ResultsAside({ live, pending, shown, system, onRetry, calibration }: Props) {
+  // the figures update first; the drawing follows in a render of its own
+  const sketch = useDeferredValue(shown);
   const issues = live.status === 'invalid' ? live.issues : [];
   return (
     <aside aria-labelledby="results-title" className="space-y-4">

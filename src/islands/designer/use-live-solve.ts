@@ -23,8 +23,11 @@ export function useLiveSolve(
 ): { live: LiveState; last: { design: DesignSI; result: Result } | null; pending: boolean; retry: () => void } {
   const [live, setLive] = useState<LiveState>({ status: 'idle' });
   const [last, setLast] = useState<{ design: DesignSI; result: Result } | null>(null);
-  const [pending, setPending] = useState(true);
   const [attempt, setAttempt] = useState(0);
+  // the request whose answer is on screen; "pending" is read from it in render, so a keystroke costs no extra render
+  const [answered, setAnswered] = useState<string | null>(null);
+  const asked = `${attempt}:${key}`;
+  const pending = answered !== asked;
   const seq = useRef(0);
   const shown = useRef(0);
   const lastRun = useRef(-Infinity);
@@ -36,12 +39,13 @@ export function useLiveSolve(
   // a layout effect: the request leaves in the commit of the keystroke itself, not in a later task
   useLayoutEffect(() => {
     const mine = ++seq.current;
+    const request = `${attempt}:${key}`;
     const run = async () => {
       lastRun.current = performance.now();
       const r = await solverClient().request({ type: 'solve', input: inputRef.current });
       if (mine < shown.current) return;
       shown.current = mine;
-      if (mine === seq.current) setPending(false);
+      if (mine === seq.current) setAnswered(request);
       if (r.ok && r.reply.type === 'solve') {
         setLive({ status: 'ok', ...r.reply.data });
         setLast({ design: r.reply.data.design, result: r.reply.data.result });
@@ -52,10 +56,8 @@ export function useLiveSolve(
     // after a pause the request goes at once, in this effect; a burst of keys waits for the window to end
     if (wait <= 0) {
       void run();
-      setPending(true);
       return;
     }
-    setPending(true);
     const timer = setTimeout(run, wait);
     return () => clearTimeout(timer);
   }, [key, attempt]);
