@@ -4,7 +4,8 @@ import type { DesignInput } from '~/lib/design';
 import type { DesignIssue, DesignSI, Result } from '~/solver';
 import { solverClient } from './solver-client';
 import type { UnitSystem } from '~/lib/format';
-import type { Calibration } from '~/lib/buildsheet/calibration';
+import { calibratedTuning, type Calibration } from '~/lib/buildsheet/calibration';
+import { CalibratedTuningContext } from './results/calibrated-tuning';
 import { CoilDrawing } from '../drawing/CoilDrawing';
 import { ResultsPanel } from './results/ResultsPanel';
 import { ChartsPanel } from './ChartsPanel';
@@ -21,8 +22,8 @@ export type DesignViewerProps = {
   designSI?: DesignSI | null;
 };
 
-/** A saved design, read-only: drawing, results and charts, no inputs. For share links and build sheets. */
-export default function DesignViewer({ name, design, result, unitSystem = 'metric', calibration = null, designSI }: DesignViewerProps) {
+/** The viewer's content: the stored design read into SI, its drawing, results and charts. */
+function DesignViewerView({ name, design, result, unitSystem = 'metric', calibration = null, designSI }: DesignViewerProps) {
   const [system, setSystem] = useState<UnitSystem>(unitSystem);
   const inputKey = useMemo(() => JSON.stringify(design), [design]);
   const readInput = useCallback(() => design, [design]);
@@ -77,6 +78,15 @@ export default function DesignViewer({ name, design, result, unitSystem = 'metri
       </div>
       <ChartsPanel design={parsed.design} input={readInput} inputKey={inputKey} system={system} />
     </div>
+  );
+}
+
+/** A saved design, read-only: drawing, results and charts, no inputs. For share links and build sheets. */
+export default function DesignViewer(props: DesignViewerProps) {
+  return (
+    <CalibratedTuningContext.Provider value={calibratedTuning}>
+      <DesignViewerView {...props} />
+    </CalibratedTuningContext.Provider>
   );
 }
 

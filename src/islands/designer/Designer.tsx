@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
+import { lazy, Suspense, useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import { primaryInnerDefault } from '~/lib/design/defaults';
 import { FormProvider, useForm, useWatch, type UseFormReturn } from 'react-hook-form';
 import { withApi } from '~/lib/api/provider';
@@ -16,10 +16,10 @@ import { SecondaryPart, ToploadPart, PrimaryPart, TankPart, SupplyPart, TuningPa
 import { designResolver } from './form/resolver';
 import { convertLengths, emptyValues, fromDesignInput, toDesignInput, type FormValues } from './form/values';
 import { ChartsPanel } from './ChartsPanel';
-import { ConflictDialog } from './ConflictDialog';
 import { DraftNotes } from './DraftNotes';
 import { GoalPanel } from './GoalPanel';
 import { ResultsAside } from './ResultsAside';
+import { adoptsValues, CalibratedTuningContext, useCalibratedTuning } from './results/calibrated-tuning';
 import { SaveBar } from './SaveBar';
 import { UnitSwitch } from './UnitSwitch';
 import { useDesignSave } from './use-design-save';
@@ -44,6 +44,9 @@ export type DesignerProps = {
 function getPath(o: unknown, path: string): unknown {
   return path.split('.').reduce<unknown>((v, k) => (v && typeof v === 'object' ? (v as Record<string, unknown>)[k] : undefined), o);
 }
+
+// shown only when a save meets a newer revision: loaded then
+const ConflictDialog = lazy(() => import('./ConflictDialog').then((m) => ({ default: m.ConflictDialog })));
 
 const keyOf = (v: FormValues) => JSON.stringify([v.name.trim(), toDesignInput(v)]);
 
@@ -269,12 +272,15 @@ function DesignerBody(props: DesignerProps & { initial: FormValues; form: UseFor
     setBaseline(v);
   }
 
-  const shown = useMemo(() => (live.status === 'ok' ? { design: live.design, result: live.result } : last), [live, last]);
+  // with adopted bench values the tap is worked out from them: the results wait for that code (loaded only then)
+  const calibratedTuning = useCalibratedTuning(adoptsValues(props.calibration));
+  const ready = !adoptsValues(props.calibration) || calibratedTuning !== null;
+  const shown = useMemo(() => (!ready ? null : live.status === 'ok' ? { design: live.design, result: live.result } : last), [live, last, ready]);
   // the headline figures update first; the drawing and the charts follow in a render of their own
   const nameError = feedback.errorFor('name');
 
   return (
-    <>
+    <CalibratedTuningContext.Provider value={calibratedTuning}>
       <FieldFeedbackContext.Provider value={feedbackStore}>
         <div className="space-y-6">
           <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
@@ -323,9 +329,13 @@ function DesignerBody(props: DesignerProps & { initial: FormValues; form: UseFor
           </div>
           {shown && <ChartsPanel design={shown.design} input={currentInput} inputKey={inputKey} system={system} />}
         </div>
-        {save.conflict && <ConflictDialog onReload={save.reloadLatest} onCopy={save.saveAsCopy} onClose={save.closeConflict} />}
+        {save.conflict && (
+          <Suspense fallback={null}>
+            <ConflictDialog onReload={save.reloadLatest} onCopy={save.saveAsCopy} onClose={save.closeConflict} />
+          </Suspense>
+        )}
       </FieldFeedbackContext.Provider>
-    </>
+    </CalibratedTuningContext.Provider>
   );
 }
 
