@@ -1,4 +1,5 @@
 import { useCallback, useLayoutEffect, useRef, useState } from 'react';
+import { flushSync } from 'react-dom';
 import type { DesignIssue, DesignSI, Result } from '~/solver';
 import { solverClient } from './solver-client';
 
@@ -45,12 +46,15 @@ export function useLiveSolve(
       const r = await solverClient().request({ type: 'solve', input: inputRef.current });
       if (mine < shown.current) return;
       shown.current = mine;
-      if (mine === seq.current) setAnswered(request);
-      if (r.ok && r.reply.type === 'solve') {
-        setLive({ status: 'ok', ...r.reply.data });
-        setLast({ design: r.reply.data.design, result: r.reply.data.result });
-      } else if (!r.ok && r.failed) setLive({ status: 'failed', message: r.message });
-      else if (!r.ok) setLive({ status: 'invalid', issues: r.issues, message: r.message });
+      // the answer is rendered in the task that brought it, not in one scheduled after it
+      flushSync(() => {
+        if (mine === seq.current) setAnswered(request);
+        if (r.ok && r.reply.type === 'solve') {
+          setLive({ status: 'ok', ...r.reply.data });
+          setLast({ design: r.reply.data.design, result: r.reply.data.result });
+        } else if (!r.ok && r.failed) setLive({ status: 'failed', message: r.message });
+        else if (!r.ok) setLive({ status: 'invalid', issues: r.issues, message: r.message });
+      });
     };
     const wait = lastRun.current + QUIET_MS - performance.now();
     // after a pause the request goes at once, in this effect; a burst of keys waits for the window to end
