@@ -32,18 +32,18 @@ export function parseQuantity(input: number | string, kind: QuantityKind): Quant
   return full(input as string, kind);
 }
 
-let loading: Promise<void> | null = null;
+let loading: Promise<typeof import('./units-mathjs')> | null = null;
 
-/** Loads mathjs and the full reader (once). */
-export function loadFullReader(): Promise<void> {
-  loading ??= import('./units-mathjs').then(
-    () => undefined,
-    (e: unknown) => {
-      loading = null;
-      throw e;
-    },
-  );
-  return loading;
+/** Loads mathjs and sets it as the full reader (the module once; the reader whenever none is set). */
+export async function loadFullReader(): Promise<void> {
+  if (fullReader()) return;
+  loading ??= import('./units-mathjs');
+  try {
+    setFullReader((await loading).parseWithMathjs);
+  } catch (e) {
+    loading = null;
+    throw e;
+  }
 }
 
 /**
