@@ -13,6 +13,8 @@ export default defineConfig({
   vite: {
     plugins: [tailwindcss()],
     build: { chunkSizeWarningLimit: 900 },
+    // module workers, so the solver worker can load the unit library (mathjs) only for texts that need it
+    worker: { format: 'es' },
     ssr: { external: ['pdfkit', 'sharp', 's3rver', 'smtp-server', 'mailparser'] },
   },
 });

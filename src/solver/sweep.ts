@@ -1,5 +1,8 @@
 import { resonantFrequencyLC } from './secondary/resonance';
 import type { DesignSI } from './types';
+import { sweepablePaths } from './sweep-paths';
+
+export { sweepablePaths };
 import { checkDesign } from './system/checks';
 import { evaluateSecondary } from './system/secondary';
 import { evaluateTopload } from './system/topload';
@@ -41,20 +44,6 @@ export interface SweepResult {
   series: Partial<Record<SweepSeriesName, Array<number | null>>>;
   /** indices of values at which the design fails its cross-field checks */
   invalid: number[];
-}
-
-/** Numeric fields of a DesignSI a sweep may vary, as dotted paths. */
-export function sweepablePaths(d: DesignSI): string[] {
-  const out: string[] = [];
-  const walk = (v: unknown, prefix: string) => {
-    if (v && typeof v === 'object') {
-      for (const [k, x] of Object.entries(v)) walk(x, prefix ? `${prefix}.${k}` : k);
-    } else if ((typeof v === 'number' && prefix !== 'secondary.wire.awg') || (v === null && prefix === 'secondary.windingLength')) {
-      out.push(prefix);
-    }
-  };
-  walk(d, '');
-  return out;
 }
 
 function setPath(d: DesignSI, path: string, value: number): DesignSI {

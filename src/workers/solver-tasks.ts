@@ -1,4 +1,5 @@
-import { parseDesign } from '../lib/design';
+import { parseDesign } from '../lib/design/parse';
+import { FullReaderNeeded, withFullReader } from '../lib/format/units-reader';
 import { fieldLabel, issueText } from '../lib/design/labels';
 import { checkDesign } from '../solver/system/checks';
 import {
@@ -28,7 +29,7 @@ import type {
   SweepRequest,
   TuningCurve,
 } from './protocol';
-import { SOLVER_FAILED_MESSAGE } from './protocol';
+import { solveRequest, solverFailure } from './solve-task';
 
 const TUNING_POINTS = 60;
 const COUPLING_POINTS = 60;
@@ -166,23 +167,19 @@ export function goalAnswer(d: DesignSI, goal: Goal): GoalAnswer | null {
   }
 }
 
-/** Runs one request; the same code answers in the worker and, for tests, on the main thread. */
-/** A thrown error as a reply the page can show with a way to try again. */
-export function solverFailure(id: number, e: unknown): SolverResponse {
-  return { id, ok: false, failed: true, issues: [], message: e instanceof Error && e.message ? e.message : SOLVER_FAILED_MESSAGE };
-}
+export { solverFailure };
 
+/**
+ * Runs one request; the same code answers in the worker and, for tests, on the main thread. Throws
+ * `FullReaderNeeded` when a text needs mathjs and it is not loaded (see `runRequestLoading`).
+ */
 export function runRequest(id: number, request: SolverRequest, now: () => number = () => performance.now()): SolverResponse {
-  const t0 = now();
+  if (request.type === 'solve') return solveRequest(id, request.input, now);
   try {
     const parsed = parseDesign(request.input);
     if (!parsed.ok) return { id, ok: false, issues: parsed.issues };
     const d = parsed.design;
     switch (request.type) {
-      case 'solve': {
-        const result = solve(d);
-        return { id, ok: true, reply: { type: 'solve', data: { design: d, result, ms: now() - t0 } } };
-      }
       case 'sweep':
         return { id, ok: true, reply: { type: 'sweep', data: sweepData(d, request.sweep) } };
       case 'charts': {
@@ -193,6 +190,20 @@ export function runRequest(id: number, request: SolverRequest, now: () => number
       case 'goal':
         return { id, ok: true, reply: { type: 'goal', data: goalAnswer(d, request.goal) } };
     }
+  } catch (e) {
+    // a text needs mathjs, which is not loaded yet: `runRequestLoading` loads it and asks again
+    if (e instanceof FullReaderNeeded) throw e;
+    return solverFailure(id, e);
+  }
+}
+
+/**
+ * Runs one request as `runRequest` does, loading the full unit reader (mathjs) first when a text of the
+ * design needs it: the plain forms ("12 mm", "20 nF") are read without it.
+ */
+export async function runRequestLoading(id: number, request: SolverRequest, now: () => number = () => performance.now()): Promise<SolverResponse> {
+  try {
+    return await withFullReader(() => runRequest(id, request, now));
   } catch (e) {
     return solverFailure(id, e);
   }

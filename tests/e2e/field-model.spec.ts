@@ -11,6 +11,8 @@ test('designer: the field model shows the lumped and field frequencies, the shie
   await expect(page.locator('[data-result="system.modes"]')).toHaveText(/^\S+ k?Hz, \S+ [kM]?Hz, \S+ [kM]?Hz$/);
   const chart = page.getByTestId('voltage-profile-chart');
   await expect(chart).toBeVisible();
+  // the plot is drawn once the chart comes near the screen
+  await chart.scrollIntoViewIfNeeded();
   await expect(chart.locator('.recharts-line')).toHaveCount(2);
   // a denser former lowers the frequency
   await page.getByLabel('Form relative permittivity').fill('4');

@@ -1,30 +1,12 @@
-import { useId, type ReactNode } from 'react';
-import { CartesianGrid, Label, Line, LineChart, ReferenceArea, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import { lazy, Suspense, useId, useRef, type ReactNode } from 'react';
 import { formatSignificant } from '~/lib/format';
+import { useNearViewport } from '../designer/WhenVisible';
+import { dashOf, lineStyleName, type Band, type LineSpec, type RefLine } from './chart-types';
 
-export interface LineSpec {
-  key: string;
-  name: string;
-  color: string;
-  /** drawn dashed; named "dashed" in the legend and in instructions, so nothing depends on colour */
-  dashed?: boolean;
-  /** drawn dotted; named "dotted" */
-  dotted?: boolean;
-}
+export { lineStyleName, type Band, type LineSpec, type RefLine } from './chart-types';
 
-export interface RefLine {
-  x?: number;
-  y?: number;
-  label: string;
-  color?: string;
-}
-
-/** A stretch of the x axis to shade and name, e.g. points of a sweep that are not buildable. */
-export interface Band {
-  x1: number;
-  x2: number;
-  label: string;
-}
+// the plotting library loads when a chart's box comes near the screen; the box keeps its size meanwhile
+const ChartPlot = lazy(() => import('./ChartPlot'));
 
 type Props = {
   data: ReadonlyArray<Record<string, number | null>>;
@@ -42,14 +24,9 @@ type Props = {
   testId?: string;
   /** the chart's accessible name; defaults to "<y> against <x>" */
   title?: string;
+  /** draw at once rather than when the chart comes near the screen (a chart the builder has just asked for) */
+  eager?: boolean;
 };
-
-/** How a line is drawn, in words: what the legend and every instruction use instead of its colour. */
-export function lineStyleName(l: LineSpec): string {
-  return l.dashed ? 'dashed' : l.dotted ? 'dotted' : 'solid';
-}
-
-const dashOf = (l: LineSpec) => (l.dashed ? '7 4' : l.dotted ? '2 3' : undefined);
 
 /**
  * Tick labels with as many digits as the axis's span needs, so that ticks on a nearly flat series do not
@@ -82,7 +59,9 @@ function flatDomain(values: readonly number[]): [number, number] | null {
  * A line chart with labelled axes (units in the labels), a tooltip, optional reference lines and shaded bands,
  * a legend outside the plot that names each line's style, an accessible name, and the data as a table.
  */
-export function ChartFrame({ data, xKey, xLabel, yLabel, lines, refs = [], bands = [], dots = false, height = 260, yDomain = ['auto', 'auto'], xDomain = ['dataMin', 'dataMax'], caption, testId, title }: Props) {
+export function ChartFrame({ data, xKey, xLabel, yLabel, lines, refs = [], bands = [], dots = false, height = 260, yDomain = ['auto', 'auto'], xDomain = ['dataMin', 'dataMax'], caption, testId, title, eager = false }: Props) {
+  const box = useRef<HTMLDivElement>(null);
+  const near = useNearViewport(box, eager);
   const name = title ?? `${yLabel} against ${xLabel}`;
   const tableId = useId();
   const yValues = data.flatMap((r) => lines.map((l) => r[l.key]).filter((v): v is number => typeof v === 'number'));
@@ -106,50 +85,12 @@ export function ChartFrame({ data, xKey, xLabel, yLabel, lines, refs = [], bands
           ))}
         </ul>
       )}
-      <div style={{ width: '100%', height }}>
-        <ResponsiveContainer width="100%" height="100%">
-          <LineChart data={data as Array<Record<string, number | null>>} margin={{ top: 12, right: 16, bottom: 28, left: 16 }} accessibilityLayer={false} role="img" aria-label={name}>
-            <CartesianGrid stroke="var(--color-rule)" strokeDasharray="3 3" />
-            <XAxis dataKey={xKey} type="number" domain={xDomain} allowDataOverflow={typeof xDomain[0] === 'number'} tickFormatter={xTick} stroke="var(--color-ink-soft)" tick={{ fill: 'var(--color-ink-soft)', fontSize: 12 }}>
-              <Label value={xLabel} position="insideBottom" offset={-16} fill="var(--color-ink)" fontSize={13} />
-            </XAxis>
-            <YAxis domain={domain} allowDataOverflow={domain[0] !== 'auto' && domain[1] !== 'auto'} tickFormatter={yTick} stroke="var(--color-ink-soft)" tick={{ fill: 'var(--color-ink-soft)', fontSize: 12 }} width={64}>
-              <Label value={yLabel} angle={-90} position="insideLeft" style={{ textAnchor: 'middle' }} fill="var(--color-ink)" fontSize={13} offset={0} />
-            </YAxis>
-            <Tooltip
-              formatter={(v) => (typeof v === 'number' ? formatSignificant(v, 4) : String(v))}
-              labelFormatter={(v) => `${xLabel}: ${typeof v === 'number' ? formatSignificant(v, 4) : String(v)}`}
-              contentStyle={{ background: 'var(--color-panel)', borderColor: 'var(--color-rule)', color: 'var(--color-ink)' }}
-            />
-            {bands.map((b) => (
-              <ReferenceArea key={`${b.x1}-${b.x2}`} x1={b.x1} x2={b.x2} fill="var(--color-fault)" fillOpacity={0.12} stroke="var(--color-fault)" strokeDasharray="2 2" label={{ value: b.label, fill: 'var(--color-fault)', fontSize: 11, position: 'insideTop' }} ifOverflow="hidden" />
-            ))}
-            {refs.map((r) => (
-              <ReferenceLine
-                key={`${r.label}-${r.x ?? ''}-${r.y ?? ''}`}
-                x={r.x}
-                y={r.y}
-                stroke={r.color ?? 'var(--color-arc)'}
-                strokeDasharray="5 4"
-                label={{ value: r.label, fill: r.color ?? 'var(--color-arc)', fontSize: 12, position: r.x !== undefined ? 'insideTopLeft' : 'insideTopRight' }}
-              />
-            ))}
-            {lines.map((l) => (
-              <Line
-                key={l.key}
-                dataKey={l.key}
-                name={l.name}
-                type="monotone"
-                stroke={l.color}
-                strokeWidth={2}
-                strokeDasharray={dashOf(l)}
-                dot={dots ? { r: 2.5 } : false}
-                connectNulls={false}
-                isAnimationActive={false}
-              />
-            ))}
-          </LineChart>
-        </ResponsiveContainer>
+      <div ref={box} style={{ width: '100%', height }} data-chart-plot={near ? 'loaded' : 'waiting'}>
+        {near && (
+          <Suspense fallback={null}>
+            <ChartPlot data={data} xKey={xKey} xLabel={xLabel} yLabel={yLabel} lines={lines} refs={refs} bands={bands} dots={dots} yDomain={domain} xDomain={xDomain} xTick={xTick} yTick={yTick} name={name} />
+          </Suspense>
+        )}
       </div>
       {caption && <figcaption className="mt-1 text-xs text-ink-soft">{caption}</figcaption>}
       <details className="mt-1 text-xs">

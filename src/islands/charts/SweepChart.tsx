@@ -74,6 +74,7 @@ export function SweepChart({ rows, xName, xKind, xSiUnit, series, system, filena
           <ChartFrame
             key={s.key}
             testId={`sweep-${s.key}`}
+            eager
             data={data}
             xKey="x"
             xLabel={xLabel}

@@ -1,4 +1,4 @@
-import { lazy, Suspense, useEffect, useRef, useState } from 'react';
+import { lazy, memo, Suspense, useDeferredValue, useEffect, useRef, useState } from 'react';
 import type { DesignSI } from '~/solver';
 import type { UnitSystem } from '~/lib/format';
 import type { ChartsData } from '../../workers/protocol';
@@ -12,11 +12,19 @@ const ExchangeChart = lazy(() => import('../charts/ExchangeChart'));
 const BurstChart = lazy(() => import('../charts/BurstChart'));
 const PeakCurrentChart = lazy(() => import('../charts/PeakCurrentChart'));
 
-type Props = { design: DesignSI; input: unknown; inputKey: string; system: UnitSystem; showSweep?: boolean };
+type Props = {
+  design: DesignSI;
+  /** the design as the API takes it, read when a chart or a sweep is computed */
+  input: () => unknown;
+  /** changes whenever the design does: the charts are computed again */
+  inputKey: string;
+  system: UnitSystem;
+  showSweep?: boolean;
+};
 
 const loading = <p className="text-sm text-ink-soft">Loading the chart…</p>;
 
-function useChartsData(input: unknown, key: string): ChartsData | null {
+function useChartsData(input: () => unknown, key: string): ChartsData | null {
   const [data, setData] = useState<ChartsData | null>(null);
   const seq = useRef(0);
   const inputRef = useRef(input);
@@ -24,7 +32,7 @@ function useChartsData(input: unknown, key: string): ChartsData | null {
   useEffect(() => {
     const mine = ++seq.current;
     const t = setTimeout(async () => {
-      const r = await solverClient().request({ type: 'charts', input: inputRef.current });
+      const r = await solverClient().request({ type: 'charts', input: inputRef.current() });
       if (mine === seq.current && r.ok && r.reply.type === 'charts') setData(r.reply.data);
     }, 300);
     return () => clearTimeout(t);
@@ -32,7 +40,7 @@ function useChartsData(input: unknown, key: string): ChartsData | null {
   return data;
 }
 
-function Charts({ input, inputKey, system }: { input: unknown; inputKey: string; system: UnitSystem }) {
+function Charts({ input, inputKey, system }: { input: () => unknown; inputKey: string; system: UnitSystem }) {
   const data = useChartsData(input, inputKey);
   if (!data) return loading;
   return (
@@ -80,7 +88,9 @@ function Charts({ input, inputKey, system }: { input: unknown; inputKey: string;
 }
 
 /** The charts below the results, loaded only when the builder scrolls down to them. */
-export function ChartsPanel({ design, input, inputKey, system, showSweep = true }: Props) {
+export const ChartsPanel = memo(function ChartsPanel({ design: given, input, inputKey, system, showSweep = true }: Props) {
+  // the results beside the form update first; the sweep's ranges follow in a render of their own
+  const design = useDeferredValue(given);
   return (
     <section aria-labelledby="charts-title" className="space-y-4">
       <h2 id="charts-title" className="text-xl font-semibold">
@@ -92,4 +102,4 @@ export function ChartsPanel({ design, input, inputKey, system, showSweep = true 
       </WhenVisible>
     </section>
   );
-}
+});

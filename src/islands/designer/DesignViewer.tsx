@@ -1,10 +1,11 @@
 import { issueText } from '~/lib/design/labels';
-import { useEffect, useMemo, useState } from 'react';
+import { useCallback, useEffect, useMemo, useState } from 'react';
 import type { DesignInput } from '~/lib/design';
 import type { DesignIssue, DesignSI, Result } from '~/solver';
 import { solverClient } from './solver-client';
 import type { UnitSystem } from '~/lib/format';
-import type { Calibration } from '~/lib/buildsheet/calibration';
+import { calibratedTuning, type Calibration } from '~/lib/buildsheet/calibration';
+import { CalibratedTuningContext } from './results/calibrated-tuning';
 import { CoilDrawing } from '../drawing/CoilDrawing';
 import { ResultsPanel } from './results/ResultsPanel';
 import { ChartsPanel } from './ChartsPanel';
@@ -17,15 +18,21 @@ export type DesignViewerProps = {
   unitSystem?: UnitSystem;
   /** values adopted on the bench; the tap shown is calibrated by them */
   calibration?: Calibration | null;
+  /** the design already resolved into SI (by the page's server): the viewer then starts no solver worker to read it */
+  designSI?: DesignSI | null;
 };
 
-/** A saved design, read-only: drawing, results and charts, no inputs. For share links and build sheets. */
-export default function DesignViewer({ name, design, result, unitSystem = 'metric', calibration = null }: DesignViewerProps) {
+/** The viewer's content: the stored design read into SI, its drawing, results and charts. */
+function DesignViewerView({ name, design, result, unitSystem = 'metric', calibration = null, designSI }: DesignViewerProps) {
   const [system, setSystem] = useState<UnitSystem>(unitSystem);
   const inputKey = useMemo(() => JSON.stringify(design), [design]);
+  const readInput = useCallback(() => design, [design]);
   // the worker resolves the stored input into SI for the drawing and the charts
-  const [parsed, setParsed] = useState<{ ok: true; design: DesignSI } | { ok: false; issues: DesignIssue[] } | null>(null);
+  const given = useMemo(() => (designSI ? { ok: true as const, design: designSI } : null), [designSI]);
+  const [resolved, setParsed] = useState<{ ok: true; design: DesignSI } | { ok: false; issues: DesignIssue[] } | null>(null);
+  const parsed = given ?? resolved;
   useEffect(() => {
+    if (given) return;
     let live = true;
     void solverClient()
       .request({ type: 'solve', input: design })
@@ -37,7 +44,7 @@ export default function DesignViewer({ name, design, result, unitSystem = 'metri
     return () => {
       live = false;
     };
-  }, [design]);
+  }, [design, given]);
   if (!result || (parsed && !parsed.ok)) {
     return (
       <p className="cw-alert" role="status">
@@ -69,8 +76,17 @@ export default function DesignViewer({ name, design, result, unitSystem = 'metri
           <ResultsPanel result={result} system={system} calibration={calibration} design={parsed.design} />
         </section>
       </div>
-      <ChartsPanel design={parsed.design} input={design} inputKey={inputKey} system={system}  />
+      <ChartsPanel design={parsed.design} input={readInput} inputKey={inputKey} system={system} />
     </div>
+  );
+}
+
+/** A saved design, read-only: drawing, results and charts, no inputs. For share links and build sheets. */
+export default function DesignViewer(props: DesignViewerProps) {
+  return (
+    <CalibratedTuningContext.Provider value={calibratedTuning}>
+      <DesignViewerView {...props} />
+    </CalibratedTuningContext.Provider>
   );
 }
 

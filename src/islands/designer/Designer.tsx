@@ -1,6 +1,6 @@
-import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { lazy, Suspense, useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState } from 'react';
 import { primaryInnerDefault } from '~/lib/design/defaults';
-import { FormProvider, useForm, useWatch } from 'react-hook-form';
+import { FormProvider, useForm, useWatch, type UseFormReturn } from 'react-hook-form';
 import { withApi } from '~/lib/api/provider';
 import type { DesignInput } from '~/lib/design';
 import { formatFixed, formatQuantity, lengthInputText, type UnitSystem } from '~/lib/format';
@@ -11,15 +11,15 @@ import type { Goal, GoalAnswer } from '../../workers/protocol';
 import { proposeTank, type TankForm } from '~/lib/design/tank-goal';
 import { readSimpleQuantity } from '~/lib/format';
 import type { GoalApplied } from './GoalPanel';
-import { FieldFeedbackContext, fieldId, type FieldFeedback } from './form/field-context';
+import { FieldFeedbackContext, FieldFeedbackStore, fieldId, type FieldFeedback } from './form/field-context';
 import { SecondaryPart, ToploadPart, PrimaryPart, TankPart, SupplyPart, TuningPart } from './form/parts';
 import { designResolver } from './form/resolver';
 import { convertLengths, emptyValues, fromDesignInput, toDesignInput, type FormValues } from './form/values';
 import { ChartsPanel } from './ChartsPanel';
-import { ConflictDialog } from './ConflictDialog';
 import { DraftNotes } from './DraftNotes';
 import { GoalPanel } from './GoalPanel';
 import { ResultsAside } from './ResultsAside';
+import { adoptsValues, CalibratedTuningContext, useCalibratedTuning } from './results/calibrated-tuning';
 import { SaveBar } from './SaveBar';
 import { UnitSwitch } from './UnitSwitch';
 import { useDesignSave } from './use-design-save';
@@ -45,7 +45,30 @@ function getPath(o: unknown, path: string): unknown {
   return path.split('.').reduce<unknown>((v, k) => (v && typeof v === 'object' ? (v as Record<string, unknown>)[k] : undefined), o);
 }
 
+// shown only when a save meets a newer revision: loaded then
+const ConflictDialog = lazy(() => import('./ConflictDialog').then((m) => ({ default: m.ConflictDialog })));
+
 const keyOf = (v: FormValues) => JSON.stringify([v.name.trim(), toDesignInput(v)]);
+
+const NO_ISSUES: never[] = [];
+const NO_WARNINGS: SolverWarning[] = [];
+
+/** Plain data that keeps its identity while its content (compared as JSON) stays the same. */
+function useSameContent<T>(value: T): T {
+  const key = JSON.stringify(value);
+  return useMemo(() => JSON.parse(key) as T, [key]);
+}
+
+/** The form's own error messages by path: what the fields show, as a text that changes only when they do. */
+function errorMessages(errors: unknown, prefix = '', out: string[] = []): string[] {
+  if (!errors || typeof errors !== 'object') return out;
+  const e = errors as Record<string, unknown>;
+  if (typeof e.message === 'string') out.push(`${prefix}\u0000${e.message}`);
+  for (const [k, v] of Object.entries(e)) {
+    if (k !== 'ref' && k !== 'message' && k !== 'type' && v && typeof v === 'object') errorMessages(v, prefix ? `${prefix}.${k}` : k, out);
+  }
+  return out;
+}
 
 type GoalPath =
   | 'secondary.turns'
@@ -80,19 +103,29 @@ function startValues(props: DesignerProps): FormValues {
 }
 
 function DesignerInner(props: DesignerProps) {
-  const { signedIn, unitSystem, record = null, start, signInHref = '/sign-in?next=%2Fdesigns%2Fnew' } = props;
-  const editing = record !== null;
-  const readOnly = record?.role === 'viewer';
   // the values the form opened with; later props never reset a form being edited
   const [initial] = useState(() => startValues(props));
+  const form = useForm<FormValues>({ defaultValues: initial, resolver: designResolver, mode: 'onSubmit', reValidateMode: 'onChange' });
+  // The form's context is given here, above the component that watches every value: the context stays the same
+  // object while the builder types, so the fields render again only for what concerns them.
+  return (
+    <FormProvider {...form}>
+      <DesignerBody {...props} initial={initial} form={form} />
+    </FormProvider>
+  );
+}
+
+function DesignerBody(props: DesignerProps & { initial: FormValues; form: UseFormReturn<FormValues> }) {
+  const { signedIn, unitSystem, record = null, start, signInHref = '/sign-in?next=%2Fdesigns%2Fnew', initial, form } = props;
+  const editing = record !== null;
+  const readOnly = record?.role === 'viewer';
   const [baseline, setBaseline] = useState<FormValues>(initial);
 
-  const form = useForm<FormValues>({ defaultValues: initial, resolver: designResolver, mode: 'onSubmit', reValidateMode: 'onChange' });
   const { control, getValues, reset, setValue, formState, handleSubmit } = form;
   const values = useWatch({ control }) as FormValues;
   const input = useMemo(() => toDesignInput(values), [values]);
   const inputKey = useMemo(() => JSON.stringify(input), [input]);
-  const currentKey = useMemo(() => keyOf(values), [values]);
+  const currentKey = useMemo(() => JSON.stringify([values.name.trim(), input]), [values.name, input]);
   const { live, last, pending, retry } = useLiveSolve(input, inputKey);
 
   const units = useUnitSystem(unitSystem, signedIn);
@@ -101,7 +134,8 @@ function DesignerInner(props: DesignerProps) {
 
   // what "no unsaved changes" compares with: the last saved values, or the values the page started from
   const [saved, setSaved] = useState<FormValues | null>(editing ? initial : null);
-  const dirty = currentKey !== keyOf(saved ?? baseline);
+  const savedKey = useMemo(() => keyOf(saved ?? baseline), [saved, baseline]);
+  const dirty = currentKey !== savedKey;
   const guard = useLeaveGuard(dirty && (editing || signedIn) && !readOnly);
   const save = useDesignSave({
     record,
@@ -135,19 +169,28 @@ function DesignerInner(props: DesignerProps) {
   useEffect(() => clearServerIssues(), [inputKey, clearServerIssues]);
 
   const serverIssues = save.serverIssues;
-  const liveIssues = useMemo(() => (live.status === 'invalid' ? live.issues : []), [live]);
-  const warnings = useMemo<SolverWarning[]>(() => (live.status === 'ok' ? live.result.warnings : []), [live]);
+  // the same messages as before keep the same arrays, so the form's fields do not render again for every result
+  const liveIssues = useSameContent(live.status === 'invalid' ? live.issues : NO_ISSUES);
+  const warnings = useSameContent<SolverWarning[]>(live.status === 'ok' ? live.result.warnings : NO_WARNINGS);
+  // the form's own errors can change in place: they are read by their messages, so the feedback changes when
+  // they do; each field renders again only when its own messages change (`FieldFeedbackStore`)
+  const errors = formState.errors;
+  const errorsKey = errorMessages(errors).join('\u0001');
   const feedback = useMemo<FieldFeedback>(
     () => ({
       errorFor: (path) =>
         serverIssues.find((i) => i.path === path)?.message ??
         liveIssues.find((i) => i.path === path)?.message ??
-        (getPath(formState.errors, path) as { message?: string } | undefined)?.message,
+        (getPath(errors, path) as { message?: string } | undefined)?.message,
       warningsFor: (path) => warnings.filter((w) => w.path === path),
       readOnly,
     }),
-    [serverIssues, liveIssues, warnings, formState.errors, readOnly],
+    // errorsKey stands for the content of `errors`
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+    [serverIssues, liveIssues, warnings, errorsKey, readOnly],
   );
+  const [feedbackStore] = useState(() => new FieldFeedbackStore(feedback));
+  useLayoutEffect(() => feedbackStore.set(feedback), [feedbackStore, feedback]);
 
   const submit = handleSubmit(save.onValid, save.onInvalid);
   useSaveShortcut(() => void submit());
@@ -169,7 +212,7 @@ function DesignerInner(props: DesignerProps) {
   );
 
   /** Writes a goal's answer into the form and says exactly what changed, with a way to put it back. */
-  function applyGoal(a: GoalAnswer, goal: Goal): GoalApplied {
+  function writeGoal(a: GoalAnswer, goal: Goal): GoalApplied {
     const opts = { shouldDirty: true, shouldValidate: formState.isSubmitted };
     const writes: Array<[GoalPath, string]> = [];
     let message = '';
@@ -210,6 +253,14 @@ function DesignerInner(props: DesignerProps) {
     return { ok: true, message, undo: () => before.forEach(([path, value]) => setValue(path, value as never, opts)) };
   }
 
+  // the goal panel keeps one callback and reads the design when it runs, so typing does not render it again
+  const latest = useRef({ writeGoal, input });
+  useEffect(() => {
+    latest.current = { writeGoal, input };
+  });
+  const applyGoal = useCallback((a: GoalAnswer, goal: Goal) => latest.current.writeGoal(a, goal), []);
+  const currentInput = useCallback(() => latest.current.input, []);
+
   function bringBack() {
     if (draft.bringBack()) save.setStatus('Your version is back; save to keep it as the newest revision.');
   }
@@ -221,12 +272,16 @@ function DesignerInner(props: DesignerProps) {
     setBaseline(v);
   }
 
-  const shown = live.status === 'ok' ? { design: live.design, result: live.result } : last;
+  // with adopted bench values the tap is worked out from them: the results wait for that code (loaded only then)
+  const calibratedTuning = useCalibratedTuning(adoptsValues(props.calibration));
+  const ready = !adoptsValues(props.calibration) || calibratedTuning !== null;
+  const shown = useMemo(() => (!ready ? null : live.status === 'ok' ? { design: live.design, result: live.result } : last), [live, last, ready]);
+  // the headline figures update first; the drawing and the charts follow in a render of their own
   const nameError = feedback.errorFor('name');
 
   return (
-    <FormProvider {...form}>
-      <FieldFeedbackContext.Provider value={feedback}>
+    <CalibratedTuningContext.Provider value={calibratedTuning}>
+      <FieldFeedbackContext.Provider value={feedbackStore}>
         <div className="space-y-6">
           <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,1fr)]">
             <div className="space-y-4">
@@ -268,15 +323,19 @@ function DesignerInner(props: DesignerProps) {
                 <SupplyPart />
                 <TuningPart system={system} />
               </form>
-              <GoalPanel input={input} system={system} hasPrimary={values.primary.enabled} hasTank={values.tank.mode !== 'none'} bridge={values.supply.kind === 'solid-state'} readOnly={readOnly} apply={applyGoal} />
+              <GoalPanel input={currentInput} system={system} hasPrimary={values.primary.enabled} hasTank={values.tank.mode !== 'none'} bridge={values.supply.kind === 'solid-state'} readOnly={readOnly} apply={applyGoal} />
             </div>
             <ResultsAside live={live} pending={pending} shown={shown} system={system} onRetry={retry} calibration={props.calibration ?? null} />
           </div>
-          {shown && <ChartsPanel design={shown.design} input={input} inputKey={inputKey} system={system} />}
+          {shown && <ChartsPanel design={shown.design} input={currentInput} inputKey={inputKey} system={system} />}
         </div>
-        {save.conflict && <ConflictDialog onReload={save.reloadLatest} onCopy={save.saveAsCopy} onClose={save.closeConflict} />}
+        {save.conflict && (
+          <Suspense fallback={null}>
+            <ConflictDialog onReload={save.reloadLatest} onCopy={save.saveAsCopy} onClose={save.closeConflict} />
+          </Suspense>
+        )}
       </FieldFeedbackContext.Provider>
-    </FormProvider>
+    </CalibratedTuningContext.Provider>
   );
 }
 

@@ -1,11 +1,11 @@
-import { useId, useState, type FormEvent } from 'react';
+import { memo, useId, useState, type FormEvent } from 'react';
 import { browserDecimalMark, formatFixed, parseQuantityLazy, readNumberText, type UnitSystem } from '~/lib/format';
 import type { Goal, GoalAnswer } from '../../workers/protocol';
 import { solverClient } from './solver-client';
 
 type Props = {
-  /** the design as it stands, as the API takes it */
-  input: unknown;
+  /** the design as it stands, as the API takes it, read when a goal runs */
+  input: () => unknown;
   system: UnitSystem;
   hasPrimary: boolean;
   hasTank: boolean;
@@ -25,7 +25,7 @@ const K_LABEL = 'Coupling to reach (sets the secondary elevation)';
 type Status = { tone: 'ok' | 'fault'; text: string; undo?: () => void } | null;
 
 /** Goal-first entry: fix what the coil must do and let the solver's inverse functions fill in the input. */
-export function GoalPanel({ input, system: _system, hasPrimary, hasTank, bridge, readOnly, apply }: Props) {
+export const GoalPanel = memo(function GoalPanel({ input, system: _system, hasPrimary, hasTank, bridge, readOnly, apply }: Props) {
   const [freq, setFreq] = useState('');
   const [tap, setTap] = useState('');
   const [k, setK] = useState('');
@@ -39,7 +39,7 @@ export function GoalPanel({ input, system: _system, hasPrimary, hasTank, bridge,
   async function run(goal: Goal, unreachable: string) {
     setBusy(goal.kind);
     try {
-      const r = await solverClient().request({ type: 'goal', input, goal });
+      const r = await solverClient().request({ type: 'goal', input: input(), goal });
       if (!r.ok) {
         setStatus((s) => ({ ...s, [goal.kind]: { tone: 'fault', text: r.message ?? 'Fix the fields marked in the design first.' } }));
       } else if (r.reply.type === 'goal' && r.reply.data) {
@@ -220,4 +220,4 @@ export function GoalPanel({ input, system: _system, hasPrimary, hasTank, bridge,
       )}
     </section>
   );
-}
+});

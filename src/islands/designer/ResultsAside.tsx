@@ -1,3 +1,4 @@
+import { memo, useDeferredValue } from 'react';
 import type { DesignSI, Result } from '~/solver';
 import type { Calibration } from '~/lib/buildsheet/calibration';
 import { lengthsInSystem, type UnitSystem } from '~/lib/format';
@@ -17,7 +18,9 @@ type Props = {
 };
 
 /** The live results beside the form: solve state, what the results wait for, the drawing and the figures. */
-export function ResultsAside({ live, pending, shown, system, onRetry, calibration }: Props) {
+export const ResultsAside = memo(function ResultsAside({ live, pending, shown, system, onRetry, calibration }: Props) {
+  // the figures update first; the drawing follows in a render of its own
+  const sketch = useDeferredValue(shown);
   const issues = live.status === 'invalid' ? live.issues : [];
   return (
     <aside aria-labelledby="results-title" className="space-y-4">
@@ -58,7 +61,7 @@ export function ResultsAside({ live, pending, shown, system, onRetry, calibratio
             <h3 id="drawing-title" className="mb-2 text-base font-semibold">
               Side section
             </h3>
-            <CoilDrawing design={shown.design} result={shown.result} system={system} />
+            <CoilDrawing design={(sketch ?? shown).design} result={(sketch ?? shown).result} system={system} />
           </section>
           <ResultsPanel result={shown.result} system={system} stale={live.status !== 'ok'} calibration={calibration} design={shown.design} />
         </>
@@ -67,4 +70,4 @@ export function ResultsAside({ live, pending, shown, system, onRetry, calibratio
       )}
     </aside>
   );
-}
+});

@@ -1,5 +1,6 @@
-import { lazy, Suspense, useId, useMemo, useState, type FormEvent } from 'react';
-import { sweepablePaths, type DesignSI } from '~/solver';
+import { lazy, memo, Suspense, useId, useMemo, useState, type FormEvent } from 'react';
+import type { DesignSI } from '~/solver';
+import { sweepablePaths } from '~/solver/sweep-paths';
 import { formatSignificant, lengthInputText, lengthsInSystem, formatQuantity, parseQuantityLazy, readNumberText, type UnitSystem } from '~/lib/format';
 import { findDesignField } from '~/lib/design/registry';
 import type { SweepData } from '../../workers/protocol';
@@ -8,7 +9,7 @@ import { currentValue, defaultRange, SWEEP_INPUTS, SWEEP_SERIES_OPTIONS, type Sw
 
 const SweepChart = lazy(() => import('../charts/SweepChart'));
 
-type Props = { design: DesignSI; input: unknown; system: UnitSystem };
+type Props = { design: DesignSI; /** the design as the API takes it, read when the sweep runs */ input: () => unknown; system: UnitSystem };
 
 function rangeText(v: number, s: SweepInput, system: UnitSystem): string {
   if (s.quantity === 'length') return lengthInputText(v, system, 4);
@@ -25,7 +26,7 @@ async function readRange(text: string, s: SweepInput): Promise<{ ok: true; value
 }
 
 /** Sweep any numeric input over a range and chart the results the builder picks. */
-export function SweepPanel({ design, input, system }: Props) {
+export const SweepPanel = memo(function SweepPanel({ design, input, system }: Props) {
   const ids = { path: useId(), from: useId(), to: useId(), points: useId() };
   const available = useMemo(() => {
     const paths = new Set(sweepablePaths(design));
@@ -79,7 +80,7 @@ export function SweepPanel({ design, input, system }: Props) {
     if (chosen.length === 0) return fail('Choose at least one quantity to plot.');
     setError(null);
     setBusy(true);
-    const r = await solverClient().request({ type: 'sweep', input, sweep: { path: spec.path, from: a.value, to: b.value, points: n, series: chosen } });
+    const r = await solverClient().request({ type: 'sweep', input: input(), sweep: { path: spec.path, from: a.value, to: b.value, points: n, series: chosen } });
     setBusy(false);
     if (r.ok && r.reply.type === 'sweep') setData({ sweep: r.reply.data, spec });
     else if (!r.ok) fail(r.message ?? 'Fix the fields marked in the design first.');
@@ -166,4 +167,4 @@ export function SweepPanel({ design, input, system }: Props) {
       )}
     </section>
   );
-}
+});

@@ -1,10 +1,10 @@
-import { useId } from 'react';
+import { memo, useId } from 'react';
 import type { UnitSystem } from '~/lib/format';
 
 type Props = { value: UnitSystem; onChange: (s: UnitSystem) => void; note?: string | null };
 
 /** Metric or imperial for lengths; inputs accept either whatever is chosen. */
-export function UnitSwitch({ value, onChange, note }: Props) {
+export const UnitSwitch = memo(function UnitSwitch({ value, onChange, note }: Props) {
   const name = useId();
   return (
     <fieldset className="flex flex-wrap items-center gap-3">
@@ -23,4 +23,4 @@ export function UnitSwitch({ value, onChange, note }: Props) {
       {note && <span className="text-xs text-ink-soft" role="status">{note}</span>}
     </fieldset>
   );
-}
+});

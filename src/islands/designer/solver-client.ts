@@ -55,12 +55,8 @@ export class SolverClient {
     const id = this.next++;
     const worker = this.ensureWorker();
     if (!worker) {
-      const { runRequest, solverFailure } = await import('../../workers/solver-tasks');
-      try {
-        return runRequest(id, request);
-      } catch (e) {
-        return solverFailure(id, e);
-      }
+      const { runRequestLoading } = await import('../../workers/solver-tasks');
+      return runRequestLoading(id, request);
     }
     return new Promise((resolve) => {
       this.pending.set(id, { resolve });

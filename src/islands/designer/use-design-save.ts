@@ -123,7 +123,8 @@ export function useDesignSave({ record, signedIn, readOnly, system, reset, onSav
     }
   }
 
-  const clearServerIssues = useCallback(() => setServerIssues([]), []);
+  // keeps the same empty list, so typing with no server issues shown renders nothing again
+  const clearServerIssues = useCallback(() => setServerIssues((s) => (s.length === 0 ? s : [])), []);
 
   return {
     saving: create.isPending || update.isPending,

@@ -1,4 +1,5 @@
-import { useCallback, useEffect, useRef, useState } from 'react';
+import { useCallback, useLayoutEffect, useRef, useState } from 'react';
+import { flushSync } from 'react-dom';
 import type { DesignIssue, DesignSI, Result } from '~/solver';
 import { solverClient } from './solver-client';
 
@@ -23,32 +24,45 @@ export function useLiveSolve(
 ): { live: LiveState; last: { design: DesignSI; result: Result } | null; pending: boolean; retry: () => void } {
   const [live, setLive] = useState<LiveState>({ status: 'idle' });
   const [last, setLast] = useState<{ design: DesignSI; result: Result } | null>(null);
-  const [pending, setPending] = useState(true);
   const [attempt, setAttempt] = useState(0);
+  // the request whose answer is on screen; "pending" is read from it in render, so a keystroke costs no extra render
+  const [answered, setAnswered] = useState<string | null>(null);
+  const asked = `${attempt}:${key}`;
+  const pending = answered !== asked;
   const seq = useRef(0);
   const shown = useRef(0);
   const lastRun = useRef(-Infinity);
   const inputRef = useRef(input);
-  useEffect(() => {
+  useLayoutEffect(() => {
     inputRef.current = input;
   }, [input]);
 
-  useEffect(() => {
+  // a layout effect: the request leaves in the commit of the keystroke itself, not in a later task
+  useLayoutEffect(() => {
     const mine = ++seq.current;
-    setPending(true);
-    const wait = Math.max(0, lastRun.current + QUIET_MS - performance.now());
-    const timer = setTimeout(async () => {
+    const request = `${attempt}:${key}`;
+    const run = async () => {
       lastRun.current = performance.now();
       const r = await solverClient().request({ type: 'solve', input: inputRef.current });
       if (mine < shown.current) return;
       shown.current = mine;
-      if (mine === seq.current) setPending(false);
-      if (r.ok && r.reply.type === 'solve') {
-        setLive({ status: 'ok', ...r.reply.data });
-        setLast({ design: r.reply.data.design, result: r.reply.data.result });
-      } else if (!r.ok && r.failed) setLive({ status: 'failed', message: r.message });
-      else if (!r.ok) setLive({ status: 'invalid', issues: r.issues, message: r.message });
-    }, wait);
+      // the answer is rendered in the task that brought it, not in one scheduled after it
+      flushSync(() => {
+        if (mine === seq.current) setAnswered(request);
+        if (r.ok && r.reply.type === 'solve') {
+          setLive({ status: 'ok', ...r.reply.data });
+          setLast({ design: r.reply.data.design, result: r.reply.data.result });
+        } else if (!r.ok && r.failed) setLive({ status: 'failed', message: r.message });
+        else if (!r.ok) setLive({ status: 'invalid', issues: r.issues, message: r.message });
+      });
+    };
+    const wait = lastRun.current + QUIET_MS - performance.now();
+    // after a pause the request goes at once, in this effect; a burst of keys waits for the window to end
+    if (wait <= 0) {
+      void run();
+      return;
+    }
+    const timer = setTimeout(run, wait);
     return () => clearTimeout(timer);
   }, [key, attempt]);
 

@@ -33,8 +33,8 @@ function CoilDrawingView({ design, result, system = 'metric', className }: Props
     if (given) return;
     let live = true;
     // a stored design is resolved with the schema's unit parser, loaded only for this case
-    void import('~/lib/design/parse').then(({ parseDesign }) => {
-      const p = parseDesign(design);
+    void Promise.all([import('~/lib/design/parse'), import('~/lib/format/units-reader')]).then(async ([{ parseDesign }, { withFullReader }]) => {
+      const p = await withFullReader(() => parseDesign(design));
       if (live) setParsed(p.ok ? p.design : null);
     });
     return () => {

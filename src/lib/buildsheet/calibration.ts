@@ -1,10 +1,10 @@
 import type { z } from 'zod';
 import type { calibrationBodySchema, StoredCalibration } from '../api/contracts/measurements';
-import { inductanceForResonance, solveTap, type DesignSI, type Result } from '../../solver';
+import type { DesignSI, Result } from '../../solver';
+import { inductanceForResonance, solveTap } from '../../solver/tuning/tap';
 import { minimumTap, primaryInductanceAtTap } from '../../solver/system/primary';
 
 /** Measured values a builder adopted in place of the predictions: the request body and the stored form. */
-export { calibrationBodySchema as calibrationSchema } from '../api/contracts/measurements';
 export type CalibrationInput = z.output<typeof calibrationBodySchema>;
 export type Calibration = StoredCalibration;
 

@@ -13,8 +13,9 @@ export {
 } from './sheet';
 export { sheetSections, type SheetSection, type SheetRow, type SheetTable, type SheetCaution } from './sections';
 export { suggestSpool, SPOOL_SIZES_KG, SPOOL_SIZES_LB, type SpoolSuggestion } from './spool';
+// the request body's schema comes from the API contracts, so that the calibration helpers stay free of zod
+export { calibrationBodySchema as calibrationSchema } from '../api/contracts/measurements';
 export {
-  calibrationSchema,
   mergeCalibration,
   readCalibration,
   calibratedTuning,

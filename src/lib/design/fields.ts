@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { QUANTITY_KINDS, type QuantityKind } from '../format/units';
-import { parseQuantity } from '../format/units-mathjs';
+import { parseQuantity } from '../format/units-reader';
 import { readNumberText } from '../format/read-number';
 import { designField, type Bounds, type PathOfKind } from './registry';
 

@@ -1,3 +1,5 @@
+// first: the schema's unit reader gets mathjs before any module below reads a quantity
+import '../format/units-mathjs';
 export {
   designInputSchema,
   secondarySchema,

@@ -11,13 +11,27 @@ const OTHER_NAMES: Record<string, string> = {
   file: 'File',
 };
 
+// a label never changes: each path is worked out once (up to a bound, as paths can come from requests)
+const labels = new Map<string, string>();
+const MAX_KEPT_LABELS = 2000;
+
 /**
  * The name a person reads for a path of the design (a field path gives the label its input shows): the field's
  * label on screen, its part's heading for a part, and never the raw path. An API path may start with
  * "design." (a request body); array indexes are left out.
  */
 export function fieldLabel(path: string | undefined | null): string {
-  const p = (path ?? '').replace(/^design\./, '').replace(/\.\d+(?=\.|$)/g, '');
+  const key = path ?? '';
+  let label = labels.get(key);
+  if (label === undefined) {
+    label = labelOf(key);
+    if (labels.size < MAX_KEPT_LABELS) labels.set(key, label);
+  }
+  return label;
+}
+
+function labelOf(path: string): string {
+  const p = path.replace(/^design\./, '').replace(/\.\d+(?=\.|$)/g, '');
   if (p === '' || p === 'design') return 'Design';
   const field = findDesignField(p);
   if (field) return field.label;

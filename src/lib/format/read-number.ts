@@ -18,15 +18,23 @@ export type NumberRead = { ok: true; value: number; text: string } | { ok: false
 /** The rule in one line, stated beside the number fields of the forms. */
 export const NUMBER_RULE_TEXT = 'Digits may be grouped (1,000 or 1 000); a decimal comma (0,5) reads as 0.5.';
 
+// a number format is slow to build and a locale's mark never changes: each locale is asked once
+const marks = new Map<string, DecimalMark>();
+
 /** The decimal mark of a locale ("en-GB" → ".", "de-DE" → ","); the point for an unknown one. */
 export function decimalMarkOf(locale: string | undefined): DecimalMark {
   if (!locale) return '.';
+  const known = marks.get(locale);
+  if (known) return known;
+  let mark: DecimalMark = '.';
   try {
     const part = new Intl.NumberFormat(locale).formatToParts(1.5).find((p) => p.type === 'decimal');
-    return part?.value === ',' ? ',' : '.';
+    mark = part?.value === ',' ? ',' : '.';
   } catch {
-    return '.';
+    mark = '.';
   }
+  marks.set(locale, mark);
+  return mark;
 }
 
 /** The decimal mark of the browser's language; the point where there is no browser (the server renders with it). */

@@ -1,5 +1,6 @@
 import { create, unitDependencies, type Unit } from 'mathjs';
 import { expectedText, normaliseQuantityText, parseQuantityQuick, QUANTITY_KINDS, type QuantityKind, type QuantityParse } from './units';
+import { setFullReader } from './units-fallback';
 
 // only the unit machinery of mathjs
 const math = create({ unitDependencies });
@@ -70,3 +71,6 @@ export function parseWithMathjs(input: string, kind: QuantityKind): QuantityPars
 export function parseQuantity(input: number | string, kind: QuantityKind): QuantityParse {
   return parseQuantityQuick(input, kind) ?? parseWithMathjs(input as string, kind);
 }
+
+// the schema's reader (`units-reader.ts`) hands every text the plain forms do not cover to this module
+setFullReader(parseWithMathjs);

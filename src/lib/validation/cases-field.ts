@@ -1,6 +1,8 @@
 import type { ReferenceCase } from './types';
 import { defineCase, q } from './inputs';
 import { parseDesign } from '../design/parse';
+// the reference designs are read synchronously, with mathjs behind the schema's unit reader
+import '../format/units-mathjs';
 import reference from './fixtures/field-structure.json';
 import type { DesignSI } from '../../solver/types';
 import { evaluateFieldModel, FIELD_DISCRETISATION, FIELD_WINDING_ACCURACY } from '../../solver/field/model';

@@ -1,9 +1,10 @@
 import { useFormContext, useWatch } from 'react-hook-form';
-import { AWG_MAX, AWG_MIN, awgDiameter, insulatedDiameterAwg, INSULATION_SOURCE } from '~/solver';
+import { AWG_MAX, AWG_MIN, awgDiameter } from '~/solver/wire/awg';
+import { insulatedDiameterAwg, INSULATION_SOURCE } from '~/solver/wire/insulation';
 import { formatLength, type UnitSystem } from '~/lib/format';
 import { designField } from '~/lib/design/registry';
 import type { FormValues } from './values';
-import { fieldId, useFieldFeedback } from './field-context';
+import { fieldId, useFieldError, useFieldReadOnly } from './field-context';
 import { SelectField } from './SelectField';
 import { FieldWarnings } from './FieldWarnings';
 
@@ -15,7 +16,7 @@ function gaugeLabel(n: number): string {
 /** Magnet-wire gauge and enamel build, with the bare and insulated diameters they give (ASTM B258 + film build). */
 export function AwgPicker({ system }: { system: UnitSystem }) {
   const { register } = useFormContext<FormValues>();
-  const { errorFor, readOnly } = useFieldFeedback();
+  const readOnly = useFieldReadOnly();
   const awgText = useWatch<FormValues, 'secondary.wire.awg'>({ name: 'secondary.wire.awg' });
   const insulation = useWatch<FormValues, 'secondary.wire.insulation'>({ name: 'secondary.wire.insulation' });
   const awg = Number(awgText);
@@ -23,7 +24,7 @@ export function AwgPicker({ system }: { system: UnitSystem }) {
   const bare = valid ? awgDiameter(awg) : null;
   const insulated = valid ? insulatedDiameterAwg(awg, insulation) : null;
   const id = fieldId('secondary.wire.awg');
-  const error = errorFor('secondary.wire.awg');
+  const error = useFieldError('secondary.wire.awg');
   const inList = GAUGES.includes(awg);
   return (
     <div className="grid gap-3 sm:grid-cols-2">

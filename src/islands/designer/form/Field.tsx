@@ -4,7 +4,7 @@ import { findDesignField, type FieldSpec } from '~/lib/design/registry';
 import { lengthsInSystem, type UnitSystem } from '~/lib/format';
 import { BARE_NUMBER_RULE, GROUPING_RULE } from '~/lib/design/registry';
 import type { FormValues } from './values';
-import { fieldId, useFieldFeedback } from './field-context';
+import { fieldId, useFieldError, useFieldReadOnly } from './field-context';
 import { FieldWarnings } from './FieldWarnings';
 
 type Props = {
@@ -34,9 +34,9 @@ export function Field({ path, label: givenLabel, hint: givenHint, system, placeh
   const hint = givenHint ?? registryHint(spec, system);
   const mode = inputMode ?? (spec?.kind === 'count' ? (spec.integer ? 'numeric' : 'decimal') : spec?.kind === 'ratio' ? 'decimal' : 'text');
   const { register } = useFormContext<FormValues>();
-  const { errorFor, readOnly } = useFieldFeedback();
+  const readOnly = useFieldReadOnly();
   const id = fieldId(path);
-  const rawError = errorFor(path);
+  const rawError = useFieldError(path);
   const error = rawError ? lengthsInSystem(rawError, system ?? 'metric') : rawError;
   const hintId = hint ? `${id}-hint` : undefined;
   const errorId = error ? `${id}-error` : undefined;

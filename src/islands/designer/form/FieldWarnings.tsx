@@ -1,9 +1,8 @@
-import { useFieldFeedback } from './field-context';
+import { useFieldWarnings } from './field-context';
 
 /** The solver's warnings about one field (or one part), shown right where the builder can act on them. */
 export function FieldWarnings({ path, id, exact = true }: { path: string; id?: string; exact?: boolean }) {
-  const { warningsFor } = useFieldFeedback();
-  const list = warningsFor(exact ? path : `${path}`);
+  const list = useFieldWarnings(exact ? path : `${path}`);
   return (
     <div id={id} aria-live="polite">
       {list.map((w) => (

@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { useFieldFeedback } from './field-context';
+import { useFeedbackValue } from './field-context';
 
 type Props = {
   id: string;
@@ -12,9 +12,8 @@ type Props = {
 
 /** One part of the coil (secondary, topload…) as a fieldset, with messages about the part as a whole on top. */
 export function Part({ id, title, ownPaths, children, action }: Props) {
-  const { warningsFor, errorFor } = useFieldFeedback();
-  const warnings = ownPaths.flatMap((p) => warningsFor(p));
-  const errors = ownPaths.map((p) => errorFor(p)).filter((e): e is string => Boolean(e));
+  const warnings = useFeedbackValue((f) => ownPaths.flatMap((p) => f.warningsFor(p)));
+  const errors = useFeedbackValue((f) => ownPaths.map((p) => f.errorFor(p)).filter((e): e is string => Boolean(e)));
   return (
     <fieldset id={id} className="cw-card space-y-3" aria-describedby={`${id}-notes`}>
       <legend className="float-left mb-2 flex w-full items-center justify-between gap-3 text-lg font-semibold">

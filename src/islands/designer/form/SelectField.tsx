@@ -1,7 +1,7 @@
 import { useFormContext, type FieldPath } from 'react-hook-form';
 import { findDesignField } from '~/lib/design/registry';
 import type { FormValues } from './values';
-import { fieldId, useFieldFeedback } from './field-context';
+import { fieldId, useFieldError, useFieldReadOnly } from './field-context';
 
 type Props = {
   path: FieldPath<FormValues>;
@@ -18,9 +18,9 @@ export function SelectField({ path, label: givenLabel, options: givenOptions, no
   const label = givenLabel ?? spec?.label ?? path;
   const options = [...(none ? [{ value: 'none', label: none }] : []), ...(givenOptions ?? spec?.options ?? [])];
   const { register } = useFormContext<FormValues>();
-  const { errorFor, readOnly } = useFieldFeedback();
+  const readOnly = useFieldReadOnly();
   const id = fieldId(path);
-  const error = errorFor(path);
+  const error = useFieldError(path);
   return (
     <div className={className}>
       <label htmlFor={id} className="cw-label text-sm">

@@ -6,7 +6,7 @@ import { Field } from './Field';
 import { SelectField } from './SelectField';
 import { Part } from './Part';
 import { AwgPicker } from './AwgPicker';
-import { fieldId, useFieldFeedback } from './field-context';
+import { fieldId, useFieldReadOnly } from './field-context';
 import { DESIGN_PARTS, findDesignField } from '~/lib/design/registry';
 
 type PartProps = { system: UnitSystem };
@@ -71,7 +71,7 @@ export const ToploadPart = memo(function ToploadPart({ system }: PartProps) {
 
 export const PrimaryPart = memo(function PrimaryPart({ system }: PartProps) {
   const { register } = useFormContext<FormValues>();
-  const { readOnly } = useFieldFeedback();
+  const readOnly = useFieldReadOnly();
   const enabled = useWatch<FormValues, 'primary.enabled'>({ name: 'primary.enabled' });
   const shape = useWatch<FormValues, 'primary.shape'>({ name: 'primary.shape' });
   return (

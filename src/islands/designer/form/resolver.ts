@@ -6,8 +6,12 @@ import { toDesignInput, type FormValues } from './values';
 // live results already come from the same schema in the worker.
 let schemaResolver: Promise<Resolver<FormValues>> | null = null;
 function loadSchemaResolver(): Promise<Resolver<FormValues>> {
-  schemaResolver ??= Promise.all([import('@hookform/resolvers/zod'), import('~/lib/design/schema')]).then(
-    ([{ zodResolver }, { designInputSchema }]) => zodResolver(designInputSchema) as unknown as Resolver<FormValues>,
+  schemaResolver ??= Promise.all([import('@hookform/resolvers/zod'), import('~/lib/design/schema'), import('~/lib/format/units-reader')]).then(
+    ([{ zodResolver }, { designInputSchema }, { withFullReader }]) => {
+      const check = zodResolver(designInputSchema) as unknown as Resolver<FormValues>;
+      // plain forms are read without mathjs; it loads on the first text that needs it
+      return (values, context, options) => withFullReader(() => check(values, context, options));
+    },
   );
   return schemaResolver;
 }

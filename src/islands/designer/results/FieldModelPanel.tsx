@@ -1,15 +1,19 @@
-import { lazy, memo, Suspense } from 'react';
+import { memo, useDeferredValue } from 'react';
 import type { Result } from '~/solver';
 import { formatFixed, formatQuantity as q, type UnitSystem } from '~/lib/format';
+import VoltageProfileChart from '../../charts/VoltageProfileChart';
 import { Group, Row } from './Row';
 
-const VoltageProfileChart = lazy(() => import('../../charts/VoltageProfileChart'));
 
 type Props = { result: Result; system: UnitSystem };
+
+const NO_PROFILE: ReadonlyArray<{ height: number; voltage: number }> = [];
 
 /** The whole-resonator field model: lumped against field frequency, the shielding, the modes and the voltage along the winding. */
 export const FieldModelPanel = memo(function FieldModelPanel({ result: r, system }: Props) {
   const s = r.system;
+  // the figures update with the result; the chart of the voltage along the winding follows in a render of its own
+  const profile = useDeferredValue(s?.voltageProfile ?? NO_PROFILE);
   if (!s || s.voltageProfile.length === 0) return null;
   const shift = s.resonantFrequency / s.lumpedResonantFrequency - 1;
   const interaction = s.fieldCapacitance.interaction;
@@ -52,9 +56,7 @@ export const FieldModelPanel = memo(function FieldModelPanel({ result: r, system
           note={s.former.assumed ? 'Assumed: a thin-walled PVC pipe. Give the form’s material and wall to refine it.' : undefined}
         />
       </dl>
-      <Suspense fallback={<p className="text-sm text-ink-soft">Loading the chart…</p>}>
-        <VoltageProfileChart profile={s.voltageProfile} system={system} />
-      </Suspense>
+      <VoltageProfileChart profile={profile.length > 0 ? profile : s.voltageProfile} system={system} />
     </Group>
   );
 });

@@ -1,6 +1,8 @@
 import type { DesignSI, Result } from '~/solver';
 import { formatFixed, formatQuantity as q } from '~/lib/format';
-import { calibratedTuning, type Calibration } from '~/lib/buildsheet/calibration';
+import { useContext } from 'react';
+import type { Calibration } from '~/lib/buildsheet/calibration';
+import { CalibratedTuningContext } from './calibrated-tuning';
 
 type Props = { result: Result; calibration?: Calibration | null; design?: DesignSI | null };
 
@@ -10,6 +12,7 @@ type Props = { result: Result; calibration?: Calibration | null; design?: Design
  * prediction stands beside it.
  */
 export function TapCallout({ result: r, calibration, design }: Props) {
+  const calibratedTuning = useContext(CalibratedTuningContext);
   const t = r.tuning;
   const band = r.uncertainty?.loadedFrequency;
   const taps = r.uncertainty?.tapTurns;
@@ -23,7 +26,7 @@ export function TapCallout({ result: r, calibration, design }: Props) {
       </section>
     );
   }
-  const cal = calibration && design ? calibratedTuning(design, r, calibration) : null;
+  const cal = calibration && design && calibratedTuning ? calibratedTuning(design, r, calibration) : null;
   if (cal) {
     return (
       <section className="rounded-xl border-2 border-copper bg-panel p-4" aria-labelledby="tap-title" data-testid="tap-callout" data-calibrated="true">

@@ -1,5 +1,7 @@
 import { z } from 'zod';
 import { designInputSchema, designNameSchema, type DesignInput } from '../../design/schema';
+// request bodies are checked synchronously: the schema's unit reader gets mathjs for every text
+import '../../format/units-mathjs';
 import type { Result } from '../../../solver/types';
 import { designRoles } from '../../permissions';
 
