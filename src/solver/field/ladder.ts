@@ -1,4 +1,4 @@
-import { cholesky, dense, invertLower, multiply, solveMany, symmetricEigen, transpose } from '../math/dense';
+import { CholeskyDecomposition, EigenvalueDecomposition, Matrix, inverse, solve } from 'ml-matrix';
 import { MU_0 } from '../constants';
 import { nagaokaCoefficient } from '../secondary/inductance';
 
@@ -44,54 +44,48 @@ export interface LadderModes {
  * Normal modes of the winding as a ladder of coupled sections: (Dᵀ L⁻¹ D) V = ω² C V, with D the node-to-section
  * difference matrix ((DV)ⱼ = Vⱼ − Vⱼ₋₁, V₀ = 0 at the grounded base), L the section inductance matrix and C the
  * nodes' Maxwell capacitance matrix (REFERENCES g; the loaded helical line of Corum & Corum 2001, from memory).
- * Solved as the symmetric problem G⁻¹(DᵀL⁻¹D)G⁻ᵀ y = ω² y with C = GGᵀ (Cholesky) and V = G⁻ᵀy, by the cyclic
- * Jacobi symmetric eigenvalue decomposition of `math/dense.ts`. `topCapacitance` is added between the top node and ground (a streamer
+ * Solved as the symmetric problem G⁻¹(DᵀL⁻¹D)G⁻ᵀ y = ω² y with C = GGᵀ (Cholesky) and V = G⁻ᵀy, by ml-matrix's
+ * symmetric eigenvalue decomposition. `topCapacitance` is added between the top node and ground (a streamer
  * allowance). The equivalent lumped pair at the top has C_eff = VᵀCV/V_top² and L_eff = 1/(ω₁²C_eff).
  */
 export function ladderModes(L: Float64Array, C: Float64Array, sections: number, topCapacitance = 0, count = 3): LadderModes {
   const N = sections;
-  const Lm = dense(N, N, L);
-  const Cm = dense(N, N, C);
-  if (topCapacitance) Cm.data[(N - 1) * N + N - 1] += topCapacitance;
-  const D = dense(N, N);
+  const Lm = Matrix.from1DArray(N, N, L);
+  const Cm = Matrix.from1DArray(N, N, C);
+  if (topCapacitance) Cm.set(N - 1, N - 1, Cm.get(N - 1, N - 1) + topCapacitance);
+  const D = new Matrix(N, N);
   for (let j = 0; j < N; j++) {
-    D.data[j * N + j] = 1;
-    if (j > 0) D.data[j * N + j - 1] = -1;
+    D.set(j, j, 1);
+    if (j > 0) D.set(j, j - 1, -1);
   }
-  const LinvD = solveMany(Lm, D);
-  const K = multiply(transpose(D), LinvD);
-  const G = cholesky(Cm);
-  if (!G) throw new RangeError('the capacitance matrix is not positive definite');
-  const Ginv = invertLower(G);
-  const GinvT = transpose(Ginv);
-  const M = multiply(multiply(Ginv, K), GinvT);
+  const LinvD = solve(Lm, D);
+  const K = D.transpose().mmul(LinvD);
+  const chol = new CholeskyDecomposition(Cm);
+  if (!chol.isPositiveDefinite()) throw new RangeError('the capacitance matrix is not positive definite');
+  const Ginv = inverse(chol.lowerTriangularMatrix);
+  const M = Ginv.mmul(K).mmul(Ginv.transpose());
   // exact symmetry for the symmetric solver
   for (let a = 0; a < N; a++) for (let b = a + 1; b < N; b++) {
-    const mean = 0.5 * (M.data[a * N + b] + M.data[b * N + a]);
-    M.data[a * N + b] = mean;
-    M.data[b * N + a] = mean;
+    const mean = 0.5 * (M.get(a, b) + M.get(b, a));
+    M.set(a, b, mean);
+    M.set(b, a, mean);
   }
-  const evd = symmetricEigen(M);
-  const values = Array.from(evd.values);
+  const evd = new EigenvalueDecomposition(M, { assumeSymmetric: true });
+  const values = evd.realEigenvalues;
   const order = values.map((_, i) => i).sort((a, b) => values[a] - values[b]);
   const first = order[0];
-  const y = dense(N, 1);
-  for (let k = 0; k < N; k++) y.data[k] = evd.vectors.data[k * N + first];
-  const Vm = multiply(GinvT, y);
-  const top = Vm.data[N - 1];
+  const y = evd.eigenvectorMatrix.getColumnVector(first);
+  const Vm = Ginv.transpose().mmul(y);
+  const top = Vm.get(N - 1, 0);
   const voltage = new Float64Array(N);
-  for (let k = 0; k < N; k++) voltage[k] = Vm.data[k] / top;
-  const Iv = multiply(LinvD, dense(N, 1, voltage));
+  for (let k = 0; k < N; k++) voltage[k] = Vm.get(k, 0) / top;
+  const Vn = Matrix.columnVector(Array.from(voltage));
+  const Iv = LinvD.mmul(Vn);
   let peak = 0;
-  for (let k = 0; k < N; k++) peak = Math.max(peak, Math.abs(Iv.data[k]));
+  for (let k = 0; k < N; k++) peak = Math.max(peak, Math.abs(Iv.get(k, 0)));
   const current = new Float64Array(N);
-  for (let k = 0; k < N; k++) current[k] = Math.abs(Iv.data[k]) / peak;
-  let effectiveCapacitance = 0;
-  for (let a = 0; a < N; a++) {
-    let row = 0;
-    for (let b = 0; b < N; b++) row += Cm.data[a * N + b] * voltage[b];
-    effectiveCapacitance += voltage[a] * row;
-  }
+  for (let k = 0; k < N; k++) current[k] = Math.abs(Iv.get(k, 0)) / peak;
+  const effectiveCapacitance = Vn.transpose().mmul(Cm).mmul(Vn).get(0, 0);
   const omega2 = order.slice(0, count).map((i) => values[i]);
   return { omega2, voltage, current, effectiveCapacitance, effectiveInductance: 1 / (omega2[0] * effectiveCapacitance) };
 }

@@ -1,4 +1,4 @@
-import { dense, select, solveMany } from '../math/dense';
+import { LuDecomposition, Matrix } from 'ml-matrix';
 import { EPSILON_0 } from '../constants';
 import { gaussLegendre } from '../math/gauss';
 import { curveOf, ringKernel, selfPanel, type AxisymmetricShape, type Curve } from '../topload/bem';
@@ -63,7 +63,7 @@ const GRADING = 0.8;
  * q·ln(8R/a)/(4π²ε0R). With P the potential coefficients and B the map from node voltages to panel
  * potentials, the panel charges are q = P⁻¹BV and the node charges Bᵀq, so C = Bᵀ·diag(w)·P⁻¹B (made
  * exactly symmetric by averaging with its transpose). `chargeFactor` scales the winding's own charge (the
- * former's dielectric, see former.ts). One LU factorisation (`math/dense.ts`) serves every right-hand side;
+ * former's dielectric, see former.ts). One LU factorisation (ml-matrix) serves every right-hand side;
  * the coil-alone and topload-alone figures come from the same coefficients with the other body removed.
  */
 export function structureCapacitance(
@@ -183,25 +183,24 @@ export function structureCapacitance(
       row[j] = value;
     }
   }
-  const A = dense(n, n);
-  for (let i = 0; i < n; i++) A.data.set(rows[i], i * n);
+  const A = new Matrix(rows);
 
   // Node voltages → panel potentials (hat functions along the winding; the topload follows node N).
   const nodeZ = new Float64Array(N + 1);
   for (let k = 0; k <= N; k++) nodeZ[k] = zBottom + (length * k) / N;
-  const B = dense(n, N);
+  const B = new Matrix(n, N);
   for (let j = 0; j < n; j++) {
     const p = panels[j];
     if (p.kind === 'ring') continue;
     if (p.body === 'topload') {
-      B.data[j * N + N - 1] = 1;
+      B.set(j, N - 1, 1);
       continue;
     }
     const s = ((colZ[j] - zBottom) / length) * N;
     const k = Math.min(N - 1, Math.floor(s));
     const f = s - k;
-    if (k >= 1) B.data[j * N + k - 1] = 1 - f;
-    B.data[j * N + k] = f;
+    if (k >= 1) B.set(j, k - 1, 1 - f);
+    B.set(j, k, f);
   }
   const chargeWeight = new Float64Array(n);
   for (let j = 0; j < n; j++) {
@@ -212,16 +211,16 @@ export function structureCapacitance(
   const maxwell = (keep: (j: number) => boolean): Float64Array => {
     const idx: number[] = [];
     for (let j = 0; j < n; j++) if (keep(j)) idx.push(j);
-    const sub = idx.length === n ? A : select(A, idx, idx);
-    const rhs = idx.length === n ? B : select(B, idx, Array.from({ length: N }, (_, k) => k));
-    const U = solveMany(sub, rhs);
+    const sub = idx.length === n ? A : A.selection(idx, idx);
+    const rhs = idx.length === n ? B : B.selection(idx, Array.from({ length: N }, (_, k) => k));
+    const U = new LuDecomposition(sub).solve(rhs);
     const C = new Float64Array(N * N);
     for (let a = 0; a < N; a++) {
       for (let b = 0; b < N; b++) {
         let sum = 0;
         for (let r = 0; r < idx.length; r++) {
-          const bra = rhs.data[r * N + a];
-          if (bra !== 0) sum += bra * chargeWeight[idx[r]] * U.data[r * N + b];
+          const bra = rhs.get(r, a);
+          if (bra !== 0) sum += bra * chargeWeight[idx[r]] * U.get(r, b);
         }
         C[a * N + b] = sum;
       }
@@ -244,11 +243,11 @@ export function structureCapacitance(
   if (g.topload) {
     const idx: number[] = [];
     for (let j = 0; j < n; j++) if (!isWinding(j)) idx.push(j);
-    const rhs = dense(idx.length, 1);
-    idx.forEach((j, r) => (rhs.data[r] = isTopload(j) ? 1 : 0));
-    const u = solveMany(select(A, idx, idx), rhs);
+    const rhs = new Matrix(idx.length, 1);
+    idx.forEach((j, r) => rhs.set(r, 0, isTopload(j) ? 1 : 0));
+    const u = new LuDecomposition(A.selection(idx, idx)).solve(rhs);
     idx.forEach((j, r) => {
-      if (isTopload(j)) toploadAlone += chargeWeight[j] * u.data[r];
+      if (isTopload(j)) toploadAlone += chargeWeight[j] * u.get(r, 0);
     });
   }
   return { matrix, coilAlone, toploadAlone, nodeZ, panels: n };
