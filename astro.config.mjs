@@ -1,4 +1,5 @@
 // @ts-check
+import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'astro/config';
 import node from '@astrojs/node';
 import react from '@astrojs/react';
@@ -12,6 +13,9 @@ export default defineConfig({
   security: { checkOrigin: false },
   vite: {
     plugins: [tailwindcss()],
+    // ml-matrix's package entry for `import` wraps its CommonJS bundle, which cannot be tree-shaken; its own
+    // ES module sources can, so the solver worker carries only the classes the field model uses.
+    resolve: { alias: [{ find: /^ml-matrix$/, replacement: fileURLToPath(new URL('./node_modules/ml-matrix/src/index.js', import.meta.url)) }] },
     build: { chunkSizeWarningLimit: 900 },
     // module workers, so the solver worker can load the unit library (mathjs) only for texts that need it
     worker: { format: 'es' },
