@@ -56,7 +56,7 @@ function belowOne(lhr: Lhr, category: string): string[] {
 }
 
 async function main() {
-  const server = await startServer({ COILWRIGHT_SOLVE_RATE_LIMIT: '100000' });
+  const server = await startServer({ COILWRIGHT_SOLVE_RATE_LIMIT: '100000', COILWRIGHT_WARM_PAGES: '1' });
   const chrome = await launchChrome();
   try {
     const c = new Client(server.url);

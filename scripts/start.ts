@@ -111,6 +111,25 @@ async function main() {
   for (const [route, load] of entry.pageMap ?? []) entry.pageMap!.set(route, once(load));
   await listen(frontHandler(entry.handler, join(distDir, 'client'), env().TRUSTED_PROXIES), env().HOST, env().PORT);
   console.log(`[start] Coilwright is serving on http://${process.env.HOST}:${process.env.PORT}`);
+  if (env().COILWRIGHT_WARM_PAGES === 1 && !process.env.SERVER_CERT_PATH) void warmSharedPages(env().HOST, env().PORT);
+}
+
+/**
+ * Renders the pages that are the same for every visitor without a session (home, methods, safety, validation)
+ * once, in each encoding the page cache keeps, so that no visitor waits for the first render (the validation
+ * page computes every reference check).
+ */
+async function warmSharedPages(host: string, port: number) {
+  const { SHARED_PAGES } = await import('../src/server/security/page-cache');
+  const name = host === '0.0.0.0' || host === '::' ? '127.0.0.1' : host.includes(':') ? `[${host}]` : host;
+  const base = `http://${name}:${port}`;
+  try {
+    for (const path of SHARED_PAGES) {
+      for (const encoding of ['br', 'gzip', 'identity']) await (await fetch(base + path, { headers: { 'accept-encoding': encoding } })).arrayBuffer();
+    }
+  } catch (e) {
+    console.error('[start] could not render the shared pages ahead:', e instanceof Error ? e.message : e);
+  }
 }
 
 main().catch((e) => {

@@ -23,7 +23,7 @@ async function load(url: string, connections: number, opts: { method?: 'GET' | '
 }
 
 export async function runApiBench(): Promise<void> {
-  const app = await startServer({ COILWRIGHT_SOLVE_RATE_LIMIT: '1000000000', COILWRIGHT_AUTH_RATE_LIMIT: '1000' }, { keepData: true });
+  const app = await startServer({ COILWRIGHT_SOLVE_RATE_LIMIT: '1000000000', COILWRIGHT_AUTH_RATE_LIMIT: '1000', COILWRIGHT_WARM_PAGES: '1' }, { keepData: true });
   const design = exampleDesigns[1].design;
   const c = new Client(app.url);
   await c.signUp('Bench Bo', `bench-${process.pid}@example.test`);

@@ -25,6 +25,8 @@ const schema = z.object({
   // Requests per minute and client; the tests raise the sign-in limit.
   COILWRIGHT_AUTH_RATE_LIMIT: z.coerce.number().int().min(1).default(10),
   COILWRIGHT_SOLVE_RATE_LIMIT: z.coerce.number().int().min(1).default(120),
+  // 1: render the pages that are the same for every visitor right after start (the first visitor waits for none)
+  COILWRIGHT_WARM_PAGES: z.coerce.number().int().min(0).max(1).default(1),
   // Invitation mails per minute and account: a short burst is fine, a flood is not.
   COILWRIGHT_INVITE_RATE_LIMIT: z.coerce.number().int().min(1).default(20),
   // Failed sign-ins per account within 15 minutes; seconds the signed session cookie copy is trusted.

@@ -54,6 +54,8 @@ export async function startServer(extraEnv: Record<string, string> = {}, opts: S
       DATA_DIR: dataDir,
       COILWRIGHT_SKIP_BUILD: '1',
       COILWRIGHT_AUTH_RATE_LIMIT: '1000',
+      // tests render the shared pages when they ask for them; benches and Lighthouse warm them as npm start does
+      COILWRIGHT_WARM_PAGES: '0',
       SMTP_URL: '',
       S3_ENDPOINT: '',
       BETTER_AUTH_URL: '',
