@@ -276,7 +276,6 @@ function DesignerBody(props: DesignerProps & { initial: FormValues; form: UseFor
   const calibratedTuning = useCalibratedTuning(adoptsValues(props.calibration));
   const ready = !adoptsValues(props.calibration) || calibratedTuning !== null;
   const shown = useMemo(() => (!ready ? null : live.status === 'ok' ? { design: live.design, result: live.result } : last), [live, last, ready]);
-  // the headline figures update first; the drawing and the charts follow in a render of their own
   const nameError = feedback.errorFor('name');
 
   return (
