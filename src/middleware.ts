@@ -13,6 +13,32 @@ import { keepRender } from './server/render-cache';
 
 let origins: ReadonlySet<string> | undefined;
 
+type Lookup = { user: App.Locals['user']; session: App.Locals['session']; setCookies: string[] };
+const lookups = new Map<string, Promise<Lookup>>();
+
+/** The session of a request's cookies through better-auth (its signed cookie cache, or the database). */
+async function lookUpSession(requestHeaders: Headers, memoKey: string): Promise<Lookup> {
+  const none: Lookup = { user: null, session: null, setCookies: [] };
+  try {
+    const auth = getAuth();
+    let { headers, response: found } = await auth.api.getSession({ headers: requestHeaders, returnHeaders: true });
+    if (found && changedWithin(found.user.id, sessionCacheMs())) {
+      // The cached copy may predate the change: ask the database (this also rewrites the cookie).
+      ({ headers, response: found } = await auth.api.getSession({ headers: requestHeaders, returnHeaders: true, query: { disableCookieCache: true } }));
+    }
+    const setCookies = headers.getSetCookie();
+    if (!found || (found.user as { banned?: boolean }).banned) return { ...none, setCookies };
+    const user = toSessionUser(found.user as Record<string, unknown>);
+    const session = { id: found.session.id, expiresAt: new Date(found.session.expiresAt) };
+    // Only a lookup that left the cookies as they were is remembered: a refreshed cookie goes out once.
+    if (setCookies.length === 0) rememberSession(memoKey, { user, session });
+    return { user, session, setCookies };
+  } catch (e) {
+    console.error('[session]', e);
+    return none;
+  }
+}
+
 // Fills Astro.locals (each page and endpoint guards itself), refuses cross-site writes, and finishes
 // every response: security headers, rate-limit headers, refreshed session cookies, compression.
 export const onRequest = defineMiddleware(async (context, next) => {
@@ -49,23 +75,17 @@ export const onRequest = defineMiddleware(async (context, next) => {
     context.locals.user = recalled.user;
     context.locals.session = recalled.session;
   } else if (memoKey) {
-    try {
-      const auth = getAuth();
-      let { headers, response: found } = await auth.api.getSession({ headers: request.headers, returnHeaders: true });
-      if (found && changedWithin(found.user.id, sessionCacheMs())) {
-        // The cached copy may predate the change: ask the database (this also rewrites the cookie).
-        ({ headers, response: found } = await auth.api.getSession({ headers: request.headers, returnHeaders: true, query: { disableCookieCache: true } }));
-      }
-      setCookies = headers.getSetCookie();
-      if (found && !(found.user as { banned?: boolean }).banned) {
-        context.locals.user = toSessionUser(found.user as Record<string, unknown>);
-        context.locals.session = { id: found.session.id, expiresAt: new Date(found.session.expiresAt) };
-        // Only a lookup that left the cookies as they were is remembered: a refreshed cookie goes out once.
-        if (setCookies.length === 0) rememberSession(memoKey, { user: context.locals.user, session: context.locals.session });
-      }
-    } catch (e) {
-      console.error('[session]', e);
+    // One lookup per cookie at a time: when a remembered session expires under load, the requests that
+    // carry the same cookie wait for the one lookup instead of each asking the database.
+    let lookup = lookups.get(memoKey);
+    if (!lookup) {
+      lookup = lookUpSession(request.headers, memoKey).finally(() => lookups.delete(memoKey));
+      lookups.set(memoKey, lookup);
     }
+    const found = await lookup;
+    setCookies = found.setCookies;
+    context.locals.user = found.user;
+    context.locals.session = found.session;
   }
   let response = await next();
   if (context.locals.renderKey) response = await keepRender(context.locals.renderKey, response);

@@ -30,6 +30,12 @@ export async function runApiBench(): Promise<void> {
   const created = await c.post('/api/v1/designs', { name: 'Harbour Lane bench coil', design });
   const { id } = (await created.json()) as { id: string };
   const cookie = [...c.cookies].map(([k, v]) => `${k}=${v}`).join('; ');
+  // A browser keeps the session cookie better-auth refreshes (its signed copy lasts 60 s); autocannon sends one
+  // fixed header, so each signed-in run starts with the cookie as it stands then.
+  const freshCookie = async () => {
+    await c.get('/api/v1/me');
+    return [...c.cookies].map(([k, v]) => `${k}=${v}`).join('; ');
+  };
   const get = async (path: string, withCookie: boolean) => (await fetch(app.url + path, { headers: withCookie ? { cookie } : {} })).text();
   const bodies = { design: await get(`/api/v1/designs/${id}`, true), page: await get(`/designs/${id}`, true), home: await get('/', false) };
   const tmp = mkdtempSync(join(tmpdir(), 'coilwright-bench-'));
@@ -54,13 +60,13 @@ export async function runApiBench(): Promise<void> {
     },
     {
       name: 'GET /api/v1/designs/:id (signed in)',
-      app: (n) => load(`${app.url}/api/v1/designs/${id}`, n, { headers: { cookie } }),
+      app: async (n) => load(`${app.url}/api/v1/designs/${id}`, n, { headers: { cookie: await freshCookie() } }),
       bare: (n) => load(`${base}/design`, n),
       target: 'ratio ≥ 0.1 at 10; p99 ≤ 100 ms at 50',
     },
     {
       name: 'GET /designs/:id (signed in)',
-      app: (n) => load(`${app.url}/designs/${id}`, n, { headers: { cookie } }),
+      app: async (n) => load(`${app.url}/designs/${id}`, n, { headers: { cookie: await freshCookie() } }),
       bare: (n) => load(`${base}/page`, n),
       target: 'ratio ≥ 0.05 at 10; p99 ≤ 250 ms at 50',
     },
