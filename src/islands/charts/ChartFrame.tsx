@@ -1,19 +1,14 @@
 import { lazy, Suspense, useId, useRef, type ReactNode } from 'react';
 import { formatSignificant } from '~/lib/format';
 import { useNearViewport } from '../designer/WhenVisible';
-import { dashOf, lineStyleName, type Band, type LineSpec, type RefLine } from './chart-types';
+import { dashOf, lineStyleName, type Band, type ChartSeries, type RefLine } from './chart-types';
 
 export { lineStyleName, type Band, type LineSpec, type RefLine } from './chart-types';
 
 // the plotting library loads when a chart's box comes near the screen; the box keeps its size meanwhile
 const ChartPlot = lazy(() => import('./ChartPlot'));
 
-type Props = {
-  data: ReadonlyArray<Record<string, number | null>>;
-  xKey: string;
-  xLabel: string;
-  yLabel: string;
-  lines: LineSpec[];
+type Props = ChartSeries & {
   refs?: RefLine[];
   bands?: Band[];
   dots?: boolean;

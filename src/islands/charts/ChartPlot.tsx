@@ -1,13 +1,8 @@
 import { CartesianGrid, Label, Line, LineChart, ReferenceArea, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
 import { formatSignificant } from '~/lib/format';
-import { dashOf, type Band, type LineSpec, type RefLine } from './chart-types';
+import { dashOf, type Band, type ChartSeries, type RefLine } from './chart-types';
 
-type Props = {
-  data: ReadonlyArray<Record<string, number | null>>;
-  xKey: string;
-  xLabel: string;
-  yLabel: string;
-  lines: LineSpec[];
+type Props = ChartSeries & {
   refs: RefLine[];
   bands: Band[];
   dots: boolean;

@@ -29,3 +29,12 @@ export function lineStyleName(l: LineSpec): string {
 
 export const dashOf = (l: LineSpec) => (l.dashed ? '7 4' : l.dotted ? '2 3' : undefined);
 
+
+/** What every chart draws: rows of numbers, the column on the x axis, the axis names and the series. */
+export type ChartSeries = {
+  data: ReadonlyArray<Record<string, number | null>>;
+  xKey: string;
+  xLabel: string;
+  yLabel: string;
+  lines: LineSpec[];
+};
