@@ -17,7 +17,7 @@ import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { extname, join, relative, sep } from 'node:path';
 import { acceptsEncoding, pickEncoding } from '../../src/server/security/compress';
 import { resolveClientAddress, isTrusted, trustedProxyList } from '../../src/server/security/client-address';
-import { commonSecurityHeaders, htmlCsp, NON_HTML_CSP } from '../../src/server/security/headers';
+import { commonSecurityHeaders, htmlCsp, NON_HTML_CSP, SCRIPT_FILE_CSP } from '../../src/server/security/headers';
 import { HTTPS_HEADER } from '../../src/server/security/forwarded';
 import { pageKey, storedPage } from '../../src/server/security/page-cache';
 import { fastRead, fastSolve, sendError } from './fast-answers';
@@ -66,7 +66,7 @@ export function indexClientDir(clientDir: string): Map<string, StaticFile> {
             return undefined;
           }
         };
-        const csp = ext === '.html' ? htmlCsp(readFileSync(p, 'utf8')) : NON_HTML_CSP;
+        const csp = ext === '.html' ? htmlCsp(readFileSync(p, 'utf8')) : ext === '.js' || ext === '.mjs' ? SCRIPT_FILE_CSP : NON_HTML_CSP;
         const f: StaticFile = { path: p, type, size: st.size, etag: `"${st.size.toString(16)}-${Math.floor(st.mtimeMs).toString(16)}"`, br: has('.br'), gz: has('.gz'), csp };
         files.set(url, f);
         if (url.endsWith('/index.html')) {

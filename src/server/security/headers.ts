@@ -23,6 +23,13 @@ const BASE_POLICY = [
 /** For responses that are not HTML (JSON, files): nothing may run or be framed. */
 export const NON_HTML_CSP = "default-src 'none'; frame-ancestors 'none'";
 
+/**
+ * For the site's own script files. A script started as a worker runs under its response's policy, and the
+ * solver worker imports its lazily loaded chunks (the unit library), so scripts may load scripts of this
+ * origin; nothing else is allowed.
+ */
+export const SCRIPT_FILE_CSP = "default-src 'none'; script-src 'self'; frame-ancestors 'none'";
+
 /** One year, with subdomains (RFC 6797; one year is the preload list's minimum, common practice). */
 export const HSTS = 'max-age=31536000; includeSubDomains';
 
