@@ -34,6 +34,21 @@ test('/designs/new: typing the secondary turns changes the loaded frequency', as
   await expect(page.locator('[data-error-for="secondary.turns"]')).toContainText('whole number');
 });
 
+test('/designs/new: a length in a unit the plain reader does not know (yards) is read by the unit library the worker loads', async ({ page }) => {
+  const errors: string[] = [];
+  page.on('console', (m) => {
+    if (m.type() === 'error') errors.push(m.text());
+  });
+  await openDesigner(page, EXAMPLE);
+  const before = await loaded(page).textContent();
+  await page.getByLabel('Form outer diameter').fill('0.15 yd');
+  await expect(loaded(page)).not.toHaveText(before!);
+  await upToDate(page);
+  // 0.15 yd = 137 mm, wider than the example's 4.5 in form: more inductance, a lower loaded frequency
+  expect(parseFloat((await loaded(page).textContent())!)).toBeLessThan(parseFloat(before!));
+  expect(errors).toEqual([]);
+});
+
 test('/designs/new: switching units shows the same lengths in the other system', async ({ page }) => {
   await openDesigner(page, EXAMPLE);
   const form = page.getByLabel('Form outer diameter');
