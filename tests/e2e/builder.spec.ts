@@ -109,6 +109,8 @@ test.describe('input', () => {
   test('an import that lacks its design names the part by name, in plain words', async ({ page }) => {
     await signUp(page.request, 'importer');
     await page.goto('/designs');
+    // the file input acts once the library island has hydrated (a file set before that raises no change event)
+    await expect(page.locator('astro-island[ssr]')).toHaveCount(0);
     await page.getByLabel('Design file to import').setInputFiles({ name: 'broken.json', mimeType: 'application/json', buffer: Buffer.from(JSON.stringify({ name: 'Broken' })) });
     const alert = page.getByRole('alert').filter({ hasText: /Design/ });
     await expect(alert).toBeVisible();
