@@ -2,16 +2,16 @@
  * Requests the front server answers itself, before they reach the Astro handler: the signed-in read of one
  * design, GET /api/v1/designs/:id, the most frequent request of an open designer; a repeat visit to the design
  * page, GET /designs/:id, whose HTML the app has already rendered for the same inputs; and POST /api/v1/solve,
- * whose answer is all computation (see fastSolve). For the reads it runs the
- * same steps as the app would, with the same code: the session from the memo of verified session cookies
- * (only an entry the app itself remembered, for a user with no recent change), the same access check, the
- * same stored JSON text (services/designs) and the same render-cache key (design-page.ts). Anything else (no remembered session, no such design, no
- * role, a query string, an error) is left to the app, which answers it in full, so that the app stays the
- * only author of every error, cookie refresh and redirect.
+ * whose answer is all computation (see fastSolve). For the reads it runs the same steps as the app would,
+ * with the same code: the session from the memo of verified session cookies (only an entry the app itself
+ * remembered, for a user with no recent change), the same access check, the same stored JSON text
+ * (services/designs) and the same render-cache key (design-page.ts). Anything else (no remembered session, no
+ * such design, no role, a query string, an error) is left to the app, which answers it in full, so that the
+ * app stays the only author of every error, cookie refresh and redirect.
  */
 import type { IncomingMessage, ServerResponse } from 'node:http';
 import { siteOrigins } from '../../src/server/auth';
-import { errorResponse, ApiError } from '../../src/server/http';
+import { errorResponse, ApiError, MAX_JSON, payloadTooLarge } from '../../src/server/http';
 import { take } from '../../src/server/rate-limit';
 import { rateLimitHeaders } from '../../src/server/security/limiter';
 import { checkSameOrigin } from '../../src/server/security/origin';
@@ -26,8 +26,10 @@ import type { SessionUser } from '../../src/server/session';
 import { appendVary, encodeBody, MIN_COMPRESS_BYTES, pickEncoding } from '../../src/server/security/compress';
 import { NON_HTML_CSP } from '../../src/server/security/headers';
 
-const DESIGN_READ = /^\/api\/v1\/designs\/([A-Za-z0-9_-]{1,64})$/;
-const DESIGN_PAGE = /^\/designs\/([A-Za-z0-9_-]{1,64})$/;
+// Designs are named by UUIDs (services/designs); other paths under these (/designs/new) go to the app unread.
+const UUID = '[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}';
+const DESIGN_READ = new RegExp(`^/api/v1/designs/(${UUID})$`);
+const DESIGN_PAGE = new RegExp(`^/designs/(${UUID})$`);
 
 /**
  * Answers the request when it is one of the fast reads and everything it needs is at hand; resolves to
@@ -84,7 +86,6 @@ function send(res: ServerResponse, type: string, csp: string, encoding: string |
   res.end(body);
 }
 
-const MAX_SOLVE_BODY = 1_000_000;
 let origins: ReadonlySet<string> | undefined;
 
 /**
@@ -100,7 +101,7 @@ export async function fastSolve(req: IncomingMessage, res: ServerResponse): Prom
   origins ??= siteOrigins();
   if (!checkSameOrigin('POST', headers, origins).ok) return false;
   if (sessionCookieKey(headers.get('cookie')) !== '') return false;
-  if (Number(headers.get('content-length') ?? '0') > MAX_SOLVE_BODY) return false;
+  if (Number(headers.get('content-length') ?? '0') > MAX_JSON) return false;
 
   const decision = take('solve', String(req.headers['x-forwarded-for'] ?? ''), env().COILWRIGHT_SOLVE_RATE_LIMIT);
   const limitHeaders = rateLimitHeaders(decision, 'solve');
@@ -113,10 +114,10 @@ export async function fastSolve(req: IncomingMessage, res: ServerResponse): Prom
   let size = 0;
   for await (const chunk of req as AsyncIterable<Buffer>) {
     size += chunk.byteLength;
-    if (size <= MAX_SOLVE_BODY) chunks.push(chunk);
+    if (size <= MAX_JSON) chunks.push(chunk);
   }
-  if (size > MAX_SOLVE_BODY) {
-    await sendError(res, new ApiError('payload_too_large', `The request body is larger than ${Math.round(MAX_SOLVE_BODY / 1000)} kB.`), limitHeaders);
+  if (size > MAX_JSON) {
+    await sendError(res, payloadTooLarge(), limitHeaders);
     return true;
   }
   try {

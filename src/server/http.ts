@@ -48,19 +48,19 @@ export function handle<C>(fn: (ctx: C) => Promise<Response> | Response) {
   };
 }
 
-const MAX_JSON = 1_000_000;
+/** The largest JSON body a route reads, in bytes. */
+export const MAX_JSON = 1_000_000;
 
-/** The body as text, refused with 413 above `limit` (by its Content-Length before reading, and by what arrived). */
-export async function readJsonText(request: Request, limit = MAX_JSON): Promise<string> {
-  const len = Number(request.headers.get('content-length') ?? '0');
-  if (len > limit) throw new ApiError('payload_too_large', `The request body is larger than ${Math.round(limit / 1000)} kB.`);
-  const text = await request.text();
-  if (text.length > limit) throw new ApiError('payload_too_large', `The request body is larger than ${Math.round(limit / 1000)} kB.`);
-  return text;
+/** The 413 of a body over `limit` bytes. */
+export function payloadTooLarge(limit = MAX_JSON): ApiError {
+  return new ApiError('payload_too_large', `The request body is larger than ${Math.round(limit / 1000)} kB.`);
 }
 
 export async function readJson(request: Request, limit = MAX_JSON): Promise<unknown> {
-  const text = await readJsonText(request, limit);
+  const len = Number(request.headers.get('content-length') ?? '0');
+  if (len > limit) throw payloadTooLarge(limit);
+  const text = await request.text();
+  if (text.length > limit) throw payloadTooLarge(limit);
   try {
     return JSON.parse(text);
   } catch {

@@ -45,8 +45,9 @@ function responseOf(r: Rendered, headers: Headers): Response {
 export async function keepRender(key: string, response: Response): Promise<Response> {
   if (response.status !== 200 || response.headers.has('set-cookie') || !(response.headers.get('content-type') ?? '').startsWith('text/html')) return response;
   const html = await response.text();
-  const rendered: Rendered = store.get(key) ?? { body: new TextEncoder().encode(html), csp: htmlCsp(html), type: response.headers.get('content-type')! };
-  if (!store.has(key)) {
+  let rendered = store.get(key);
+  if (!rendered) {
+    rendered = { body: new TextEncoder().encode(html), csp: htmlCsp(html), type: response.headers.get('content-type')! };
     store.set(key, rendered);
     bytes += rendered.body.byteLength;
     for (const [k, v] of store) {
@@ -72,9 +73,4 @@ export function storedRender(key: string): Rendered | undefined {
 export function encodedRender(r: Rendered, encoding: Encoding): Promise<Uint8Array> {
   r.encoded ??= {};
   return (r.encoded[encoding] ??= encodeBody(r.body, encoding));
-}
-
-/** Number of pages held (for tests). */
-export function renderCacheSize(): number {
-  return store.size;
 }

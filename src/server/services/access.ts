@@ -1,6 +1,5 @@
 import { and, eq, sql } from 'drizzle-orm';
-import { database } from './database';
-import type { Db } from '../db';
+import { database, preparedPerDatabase } from './database';
 import { designs, designMembers, groupMembers } from '../db/schema';
 import { designCan, designRoleOfGroupRole, strongerDesignRole, type DesignAction, type DesignRole, type GroupRole } from '../../lib/permissions';
 import type { SessionUser } from '../session';
@@ -17,19 +16,8 @@ export type DesignAccess = {
   via: 'direct' | 'group' | 'site';
 };
 
-/** The design lookup every authorization starts with, prepared once per database. */
-function designById(db: Db) {
-  let q = preparedDesignById.get(db);
-  if (!q) {
-    q = prepareDesignById(db);
-    preparedDesignById.set(db, q);
-  }
-  return q;
-}
-const preparedDesignById = new WeakMap<Db, ReturnType<typeof prepareDesignById>>();
-function prepareDesignById(db: Db) {
-  return db.query.designs.findFirst({ where: eq(designs.id, sql.placeholder('id')) }).prepare();
-}
+/** The design lookup every authorization starts with. */
+const designById = preparedPerDatabase((db) => db.query.designs.findFirst({ where: eq(designs.id, sql.placeholder('id')) }).prepare());
 
 /**
  * The caller's role on a design: owner, a member role, the role their group role grants on a group's design (the
@@ -62,25 +50,20 @@ async function roleOnRow(row: Pick<DesignRow, 'id' | 'ownerId' | 'groupId'>, u: 
   return null;
 }
 
-function prepareDesignHead(db: Db) {
-  const d = designs;
-  return db
-    .select({ id: d.id, ownerId: d.ownerId, groupId: d.groupId, name: d.name, revision: d.revision, updatedAt: d.updatedAt })
-    .from(d)
-    .where(eq(d.id, sql.placeholder('id')))
-    .prepare();
-}
-const preparedHeads = new WeakMap<Db, ReturnType<typeof prepareDesignHead>>();
+const designHeadById = preparedPerDatabase((db) =>
+  db
+    .select({ id: designs.id, ownerId: designs.ownerId, groupId: designs.groupId, name: designs.name, revision: designs.revision, updatedAt: designs.updatedAt })
+    .from(designs)
+    .where(eq(designs.id, sql.placeholder('id')))
+    .prepare(),
+);
 
 /**
  * Like {@link authorize}, reading only the design's head (owner, group, name, revision, update time), for a
  * caller that answers from what it stored for that revision and reads the whole row only when it has nothing.
  */
 export async function authorizeHead(designId: string, u: SessionUser | null, action: DesignAction): Promise<{ head: DesignHead; role: DesignRole }> {
-  const db = database();
-  let q = preparedHeads.get(db);
-  if (!q) preparedHeads.set(db, (q = prepareDesignHead(db)));
-  const head = await q.get({ id: designId });
+  const head = await designHeadById(database()).get({ id: designId });
   const found = head && u ? await roleOnRow(head, u) : null;
   if (!head || !found) throw new ApiError('not_found', 'No such design.');
   if (!designCan(found.role, action)) throw new ApiError('forbidden');

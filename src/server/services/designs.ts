@@ -95,11 +95,6 @@ function designRecordOf(row: DesignRow, role: DesignRole): DesignRecord & { upda
   return { id: row.id, name: row.name, design: row.design, revision: row.revision, role, updatedAt: row.updatedAt.toISOString(), groupId: row.groupId, result: solveStored(row.design) };
 }
 
-export async function getDesign(u: SessionUser | null, id: string): Promise<DesignRecord & { updatedAt: string }> {
-  const { row, role } = await authorize(id, u, 'read');
-  return designRecordOf(row, role);
-}
-
 /**
  * The body of GET /api/v1/designs/:id as JSON text. A design's content changes only with a new revision (a
  * save writes the design and the next revision number in one statement), so the text is kept per revision,

@@ -2,8 +2,7 @@ import { and, desc, eq, inArray, sql } from 'drizzle-orm';
 import { alias } from 'drizzle-orm/sqlite-core';
 import { randomUUID } from 'node:crypto';
 import type { z } from 'zod';
-import { database } from './database';
-import type { Db } from '../db';
+import { database, preparedPerDatabase } from './database';
 import { designRevisions, groupMembers, reviewFindings, reviews, user } from '../db/schema';
 import type { decideReviewBodySchema, ReviewListItem, ReviewRecord, requestReviewBodySchema } from '../../lib/api/contracts';
 import { firstLightChecklist } from '../../lib/review/checklist';
@@ -20,8 +19,9 @@ const requester = alias(user, 'requester');
 const named = alias(user, 'named_reviewer');
 const decider = alias(user, 'decider');
 
-function prepareReviewsQuery(db: Db) {
-  return db
+/** The reviews of one design with the names of the people in them (read on every design page). */
+const reviewsQuery = preparedPerDatabase((db) =>
+  db
     .select({ r: reviews, requester: requester.name, named: named.name, decider: decider.name })
     .from(reviews)
     .leftJoin(requester, eq(reviews.requestedBy, requester.id))
@@ -29,15 +29,8 @@ function prepareReviewsQuery(db: Db) {
     .leftJoin(decider, eq(reviews.decidedBy, decider.id))
     .where(eq(reviews.designId, sql.placeholder('designId')))
     .orderBy(desc(reviews.requestedAt))
-    .prepare();
-}
-const preparedReviews = new WeakMap<Db, ReturnType<typeof prepareReviewsQuery>>();
-/** The reviews of one design with the names of the people in them; read on every design page, so prepared once per database. */
-function reviewsQuery(db: Db) {
-  let q = preparedReviews.get(db);
-  if (!q) preparedReviews.set(db, (q = prepareReviewsQuery(db)));
-  return q;
-}
+    .prepare(),
+);
 
 /** Every review of a design already authorized, newest first; `current` is false once the design has moved on. */
 export async function reviewsOf(designId: string, currentRevision: number): Promise<ReviewListItem[]> {
